@@ -1,0 +1,1 @@
+//! Two-body encounters: scattering angle, impulse, radiated energy and angular momentum.

@@ -1,0 +1,27 @@
+//! chiwave-core: the physics of gravitational and electromagnetic scattering, in plain Rust.
+//!
+//! Modules, one per observable family:
+//! - [`units`]: constants (CODATA 2018, IAU 2015 nominal, IAU 2012 au) and unit parsing.
+//! - [`deflection`]: light (massless) deflection by Schwarzschild, Kerr (equatorial) and
+//!   Reissner–Nordström lenses; weak-field series; strong-deflection limit; PPN.
+//! - [`lensing`]: point-mass lens images, magnifications, time delay; wave-optics amplification.
+//! - [`encounter`]: two-body scattering angle, impulse, radiated energy and angular momentum.
+//! - [`waveform`]: leading-order gravitational and electromagnetic waveforms, memory, spectra.
+//! - [`validity`]: regime flags attached to every result.
+//! - [`request`]: the serde request types that the page and the CLI both send.
+//!
+//! Conventions: G = c = 1 inside the physics, lengths in units of a mass stated per module;
+//! electromagnetism in Gaussian units. Errors are values ([`error::InputError`]), never panics.
+#![forbid(unsafe_code)]
+
+pub mod deflection;
+pub mod encounter;
+pub mod error;
+pub mod lensing;
+pub mod numeric;
+pub mod request;
+pub mod units;
+pub mod validity;
+pub mod waveform;
+
+pub use error::InputError;

@@ -1,0 +1,74 @@
+//! Regime flags shown with every result: where an approximation holds and where it does not.
+//!
+//! A flag has a stable `key` (for scripts), a [`Level`], the number it was judged on, and a
+//! sentence for people that says what breaks. Thresholds are common practice unless a flag's
+//! constructor names a source.
+
+use serde::Serialize;
+
+/// How far a result can be trusted in a regime.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Level {
+    /// Well inside the regime where the formula holds.
+    Ok,
+    /// Near the edge: the number is indicative; read the message.
+    Caution,
+    /// Outside the regime: the number should not be used as a prediction.
+    Invalid,
+}
+
+/// One regime check attached to a result.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Flag {
+    /// Stable machine-readable name, e.g. `"weak_field"`.
+    pub key: &'static str,
+    pub level: Level,
+    /// The quantity the judgement was made on (e.g. M/b), when there is one.
+    pub value: Option<f64>,
+    /// What the check means for the result, in one or two sentences.
+    pub message: String,
+}
+
+impl Flag {
+    pub fn new(key: &'static str, level: Level, value: Option<f64>, message: impl Into<String>) -> Self {
+        Flag { key, level, value, message: message.into() }
+    }
+
+    /// Grades a small expansion parameter `x` (≥ 0): Ok below `ok`, Caution below `bad`,
+    /// Invalid above; the message for each level is given.
+    pub fn small_parameter(key: &'static str, x: f64, ok: f64, bad: f64, msgs: [&str; 3]) -> Self {
+        let (level, msg) = if x < ok {
+            (Level::Ok, msgs[0])
+        } else if x < bad {
+            (Level::Caution, msgs[1])
+        } else {
+            (Level::Invalid, msgs[2])
+        };
+        Flag::new(key, level, Some(x), msg)
+    }
+}
+
+/// The worst level among `flags` (Ok for none).
+pub fn worst(flags: &[Flag]) -> Level {
+    flags.iter().map(|f| f.level).max().unwrap_or(Level::Ok)
+}
+
+/// The standing caution shown with every result on the page and in the CLI tables.
+pub const ESTIMATE_NOTICE: &str =
+    "Results are analytic and perturbative estimates with stated validity; they are not a substitute for full numerical simulations.";
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn grading() {
+        let f = Flag::small_parameter("x", 0.5, 0.01, 0.1, ["a", "b", "c"]);
+        assert_eq!(f.level, Level::Invalid);
+        let g = Flag::small_parameter("x", 0.001, 0.01, 0.1, ["a", "b", "c"]);
+        assert_eq!(g.level, Level::Ok);
+        assert_eq!(worst(&[f, g]), Level::Invalid);
+        assert_eq!(worst(&[]), Level::Ok);
+    }
+}

@@ -1,0 +1,1 @@
+//! Leading-order gravitational and electromagnetic waveforms, memory and spectra.

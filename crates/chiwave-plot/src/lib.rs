@@ -1,0 +1,1 @@
+//! Figures for chiwave (plotters SVG backend), shared by the page and the CLI.
