@@ -277,7 +277,7 @@ pub struct LensResult {
     /// Geometric-optics F_geo = √|μ₊| − i√|μ₋| e^{iwΔT}.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub amplification_geometric: Option<ComplexValue>,
-    /// `"series"`, `"continuation"` or `"geometric_optics"`.
+    /// `"series"`, `"continuation"`, `"asymptotic"` (all exact) or `"geometric_optics"`.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub amplification_method: Option<&'static str>,
     /// Regime flags.
@@ -404,8 +404,17 @@ impl LensRequest {
                     ),
                 });
             }
-            let a = wave::amplification(w, lens.offset())?;
-            let geo = wave::amplification_geometric(w, lens.offset())?;
+            let to_request = |e: InputError| match e {
+                InputError::OutOfRange { field: "y", value, allowed } => {
+                    InputError::OutOfRange { field: "offset", value, allowed }
+                }
+                InputError::OutOfRange { field: "w", value, allowed } => {
+                    InputError::OutOfRange { field: "frequency", value, allowed }
+                }
+                other => other,
+            };
+            let a = wave::amplification(w, lens.offset()).map_err(to_request)?;
+            let geo = wave::amplification_geometric(w, lens.offset()).map_err(to_request)?;
             result.w = Some(w);
             result.amplification = Some(a.value.into());
             result.amplification_abs = Some(a.value.norm());
@@ -414,6 +423,7 @@ impl LensRequest {
             result.amplification_method = Some(match a.method {
                 wave::Method::Series => "series",
                 wave::Method::Continuation { .. } => "continuation",
+                wave::Method::Asymptotic => "asymptotic",
                 wave::Method::GeometricOptics => "geometric_optics",
             });
             for k in ["w", "amplification", "amplification_abs", "amplification_phase_rad", "amplification_geometric"] {

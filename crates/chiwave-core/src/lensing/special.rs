@@ -278,6 +278,66 @@ pub fn kummer_m_imaginary(alpha: f64, t: f64) -> Result<(Complex64, KummerMethod
     Ok((f, KummerMethod::Continuation { steps }))
 }
 
+/// Smallest |z| at which the large-|z| expansion is tried.
+pub(crate) const ASYMPTOTIC_T_MIN: f64 = 40.0;
+/// Largest term allowed in the asymptotic sums (limits the loss to cancellation to ~3 digits).
+const ASYMPTOTIC_MAX_TERM: f64 = 1e3;
+
+/// The two sums of the large-|z| expansion of M(iα, 1, it) (DLMF 13.7.2 with b = 1):
+/// S₁ = Σ_s ((1 − a)_s)² / (s! z^s) and S₂ = Σ_s ((a)_s)² / (s! (−z)^s), a = iα, z = it.
+///
+/// # Formula
+/// M(a, b, z) ~ e^z z^{a−b}/Γ(a) Σ (1 − a)_s (b − a)_s/(s! z^s)
+///            + e^{iπa} z^{−a}/Γ(b − a) Σ (a)_s (a − b + 1)_s/(s! (−z)^s),
+/// valid for −π/2 < arg z < 3π/2 (DLMF 13.7.2, upper sign; here arg z = π/2).
+///
+/// # Domain
+/// Returns `None` unless t ≥ 40 and both sums reach a term below 1e-17 of their value before
+/// their terms start to grow again (after the initial rise up to k ≈ (α² − t)/t when α² > t),
+/// with no term above 1e3 (so the truncation and the rounding errors
+/// are both ≲ 1e-13). In practice this holds when w/(2y²) = α²/t is of order 1 or less.
+pub fn kummer_asymptotic_sums(alpha: f64, t: f64) -> Option<(Complex64, Complex64)> {
+    if !(alpha.is_finite() && t.is_finite() && alpha >= 0.0 && t >= ASYMPTOTIC_T_MIN) {
+        return None;
+    }
+    // The term ratio is ≈ (α² + k²)/((k + 1) t): terms may grow up to k₋ ≈ (α² − t)/t, then fall
+    // until k₊ ≈ t, where the expansion starts to diverge. No window of decrease: no expansion.
+    let disc = t * t - 4.0 * (alpha * alpha - t);
+    if disc < 0.0 {
+        return None;
+    }
+    let k_minus = (0.5 * (t - disc.sqrt())).max(0.0);
+    let a = Complex64::new(0.0, alpha);
+    let z = Complex64::new(0.0, t);
+    let sum = |c: Complex64, x: Complex64| -> Option<Complex64> {
+        // Σ_s ((c)_s)² / (s! x^s)
+        let inv = x.inv();
+        let mut term = Complex64::new(1.0, 0.0);
+        let mut s = CompensatedSum::new(term);
+        let mut last = 1.0f64;
+        for k in 0..MAX_SERIES_TERMS {
+            let kf = k as f64;
+            term = term * (c + kf) * (c + kf) * inv / (kf + 1.0);
+            let m = term.norm();
+            if m > ASYMPTOTIC_MAX_TERM || !m.is_finite() {
+                return None;
+            }
+            if m <= 1e-17 * s.value().norm() {
+                return Some(s.value());
+            }
+            if kf > k_minus + 2.0 && m > last {
+                return None;
+            }
+            s.add(term);
+            last = m;
+        }
+        None
+    };
+    let s1 = sum(Complex64::new(1.0, 0.0) - a, z)?;
+    let s2 = sum(a, -z)?;
+    Some((s1, s2))
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -12,7 +12,9 @@
 //! Schwarzschild radius); F → F_geo = √|μ₊| − i√|μ₋| e^{iwΔT} as w → ∞, the difference falling
 //! like 1/w; at y = 0, |F|² = πw/(1 − e^{−πw}) (finite, unlike the geometric magnification).
 
-use super::special::{continuation_steps_estimate, kummer_m_imaginary, ln_gamma, KummerMethod};
+use super::special::{
+    continuation_steps_estimate, kummer_asymptotic_sums, kummer_m_imaginary, ln_gamma, KummerMethod,
+};
 use super::PointLens;
 use crate::error::InputError;
 use num_complex::Complex64;
@@ -89,6 +91,8 @@ pub enum Method {
     Series,
     /// Exact formula, ₁F₁ by power series near 0 and this many Taylor steps along the ray.
     Continuation { steps: usize },
+    /// Exact formula, ₁F₁ by its large-|z| expansion (DLMF 13.7.2), converged to ≲ 1e-13.
+    Asymptotic,
     /// Geometric-optics limit (the exact evaluation would exceed the step budget); error ~ 1/w.
     GeometricOptics,
 }
@@ -101,6 +105,9 @@ impl Method {
             Method::Continuation { steps } => format!(
                 "exact (Takahashi & Nakamura 2003); 1F1 by power series near 0 and {steps} Taylor steps of Kummer's equation"
             ),
+            Method::Asymptotic => {
+                "exact (Takahashi & Nakamura 2003); 1F1 by its converged large-|z| expansion (DLMF 13.7.2)".into()
+            }
             Method::GeometricOptics => {
                 "geometric-optics limit √|μ+| − i√|μ−| e^{iwΔT}: the exact evaluation would be too costly here; error ~ 1/w".into()
             }
@@ -115,10 +122,31 @@ pub struct Amplification {
     pub method: Method,
 }
 
-/// Whether the exact F(w, y) fits the step budget.
+/// Whether the exact F(w, y) is available: the large-|z| expansion converges, or the
+/// continuation fits the step budget.
 pub fn exact_is_affordable(w: f64, y: f64) -> bool {
     let alpha = 0.5 * w;
-    continuation_steps_estimate(alpha, alpha * y * y) <= EXACT_STEP_BUDGET
+    let t = alpha * y * y;
+    continuation_steps_estimate(alpha, t) <= EXACT_STEP_BUDGET || kummer_asymptotic_sums(alpha, t).is_some()
+}
+
+/// F from the large-|z| expansion of ₁F₁ (DLMF 13.7.2, upper sign, arg z = π/2), with the
+/// prefactors of Takahashi & Nakamura's F combined by hand (derived here, no source):
+/// F ≈ e^{−iw(ln y + φ_m)} S₂ + y⁻² e^{iΦ} S₁, Φ = 2 Im ln Γ(1 − iα) + t + α ln t + α ln α − 2αφ_m,
+/// α = w/2, t = αy². The first term is the undeflected wave's phase relative to the minimum
+/// image; the second has modulus ~ 1/y², like the faint image. Nothing overflows.
+fn amplification_asymptotic(w: f64, y: f64) -> Result<Option<Complex64>, InputError> {
+    let alpha = 0.5 * w;
+    let t = alpha * y * y;
+    let Some((s1, s2)) = kummer_asymptotic_sums(alpha, t) else {
+        return Ok(None);
+    };
+    let pm = phi_m(y);
+    let theta = ln_gamma(Complex64::new(1.0, -alpha))?.im;
+    let direct = Complex64::from_polar(1.0, -w * (y.ln() + pm)) * s2;
+    let phase = 2.0 * theta + t + alpha * t.ln() + alpha * alpha.ln() - 2.0 * alpha * pm;
+    let other = Complex64::from_polar(1.0 / (y * y), phase) * s1;
+    Ok(Some(direct + other))
 }
 
 /// Exact point-lens amplification factor F(w, y).
@@ -152,7 +180,11 @@ pub fn amplification_factor(w: f64, y: f64) -> Result<(Complex64, Method), Input
     if w == 0.0 {
         return Ok((Complex64::new(1.0, 0.0), Method::Series));
     }
-    if !exact_is_affordable(w, y) {
+    if let Some(f) = amplification_asymptotic(w, y)? {
+        return Ok((f, Method::Asymptotic));
+    }
+    let alpha = 0.5 * w;
+    if continuation_steps_estimate(alpha, alpha * y * y) > EXACT_STEP_BUDGET {
         return Err(InputError::OutOfRange {
             field: "w",
             value: w,
@@ -162,7 +194,6 @@ pub fn amplification_factor(w: f64, y: f64) -> Result<(Complex64, Method), Input
             ),
         });
     }
-    let alpha = 0.5 * w;
     let lg = ln_gamma(Complex64::new(1.0, -alpha))?;
     let exponent = Complex64::new(0.25 * PI * w, alpha * (alpha.ln() - 2.0 * phi_m(y))) + lg;
     let (m, km) = kummer_m_imaginary(alpha, alpha * y * y)?;
@@ -216,17 +247,38 @@ fn rename(e: InputError, field: &'static str) -> InputError {
     }
 }
 
-/// F(w, y) exact where affordable, otherwise its geometric-optics limit (flagged in `method`).
+/// Smallest w at which [`amplification`] may stand in the geometric-optics limit for the exact F
+/// (there the two differ by ≲ 1/w ≈ 2 %; common practice, no source).
+pub const GEOMETRIC_FALLBACK_W_MIN: f64 = 50.0;
+
+/// F(w, y) exact where affordable, otherwise (for w ≥ 50) its geometric-optics limit, flagged
+/// in `method`.
 ///
 /// # Errors
-/// As [`amplification_factor`] for bad w or y. (At y = 0 the exact formula needs no
-/// continuation and is always affordable, so no geometric fallback is needed there.)
+/// As [`amplification_factor`] for bad w or y; `OutOfRange` on `y` if the exact F is too costly
+/// and w < 50 (geometric optics would be wrong there; this needs y ≳ 85, far outside the range
+/// where the large-|z| expansion fails, so it is not expected to occur). At y = 0 the exact
+/// formula needs no continuation and is always available.
+///
+/// # Examples
+/// ```
+/// use chiwave_core::lensing::wave::{amplification, Method};
+/// let a = amplification(1e6, 1.0).unwrap();
+/// assert_eq!(a.method, Method::GeometricOptics);
+/// ```
 pub fn amplification(w: f64, y: f64) -> Result<Amplification, InputError> {
     let w = check_w(w)?;
     let y = check_y(y)?;
     if exact_is_affordable(w, y) {
         let (value, method) = amplification_factor(w, y)?;
         return Ok(Amplification { value, method });
+    }
+    if w < GEOMETRIC_FALLBACK_W_MIN {
+        return Err(InputError::OutOfRange {
+            field: "y",
+            value: y,
+            allowed: format!("the exact F at w = {w} is too costly at this y, and geometric optics needs w ≥ {GEOMETRIC_FALLBACK_W_MIN}"),
+        });
     }
     let value = amplification_geometric(w, y)?;
     Ok(Amplification { value, method: Method::GeometricOptics })
