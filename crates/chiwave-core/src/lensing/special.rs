@@ -209,7 +209,7 @@ pub(crate) fn series_radius(amag: f64) -> f64 {
 /// (b = 1): geometric growth while the 0.35|z| bound holds, then ≈ (t + (|a| + 1) ln(t/t_s))/3.
 pub fn continuation_steps_estimate(amag: f64, t: f64) -> f64 {
     let ts = series_radius(amag);
-    if !(t > ts) {
+    if t.is_nan() || t <= ts {
         return 0.0;
     }
     let geometric = (t / ts).ln() / (1.0 + STEP_FRACTION).ln();
