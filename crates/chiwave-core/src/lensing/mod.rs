@@ -181,7 +181,7 @@ pub fn einstein_angle(gm: f64, d_l: f64, d_s: f64) -> Result<f64, InputError> {
     let d_ls = d_s - d_l;
     // Written as a product of ratios so that nothing overflows before the square root.
     let theta = (4.0 * (gm / (C * C)) / d_l * (d_ls / d_s)).sqrt();
-    if !(theta.is_finite() && theta > 0.0 && theta >= f64::MIN_POSITIVE) {
+    if !(theta.is_finite() && theta >= f64::MIN_POSITIVE) {
         return Err(InputError::OutOfRange {
             field: "mass",
             value: gm,
@@ -429,7 +429,7 @@ impl LensRequest {
             for k in ["w", "amplification", "amplification_abs", "amplification_phase_rad", "amplification_geometric"] {
                 result.sources.insert(k, SRC_WAVE);
             }
-            flags.extend(wave_flags(w, a.method));
+            flags.extend(wave_flags(w, delta_t, a.method));
         }
         result.flags = flags;
         Ok(result)
@@ -492,8 +492,20 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
 }
 
 /// Flags for the wave-optics part: geometric-optics validity and the F method.
-fn wave_flags(w: f64, method: wave::Method) -> Vec<Flag> {
+fn wave_flags(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
     let mut flags = Vec::new();
+    // The interference phase wΔT is carried in f64: its absolute error is ~1e-16·wΔT rad.
+    flags.push(Flag::small_parameter(
+        "interference_phase",
+        w * delta_t * f64::EPSILON,
+        1e-6,
+        1e-2,
+        [
+            "The interference phase wΔT is resolved (double precision).",
+            "The interference phase wΔT is large: its rounding error is this many radians; fine oscillations in F are only indicative.",
+            "The interference phase wΔT exceeds what double precision resolves: the oscillating part of F (the phase of the faint image) is not meaningful, only its envelope.",
+        ],
+    ));
     let (level, msg) = if w >= 50.0 {
         (Level::Ok, "w ≫ 1: geometric optics holds to ~1/w; the ray magnifications describe the signal.")
     } else if w >= 1.0 {
