@@ -17,6 +17,8 @@
 pub mod special;
 pub mod wave;
 
+pub use wave::{amplification_curve, AmplificationCurve};
+
 use crate::error::InputError;
 use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
@@ -286,7 +288,7 @@ pub struct LensResult {
     pub sources: BTreeMap<&'static str, &'static str>,
 }
 
-const SRC_EINSTEIN: &str = "Einstein 1936, Science 84, 506; Schneider, Ehlers & Falco 1992, Gravitational Lenses; deflection sheet §4";
+const SRC_EINSTEIN: &str = "Einstein 1936; Refsdal 1964; Schneider, Ehlers & Falco 1992, Gravitational Lenses; deflection sheet §4";
 const SRC_IMAGES: &str = "Paczyński 1986, ApJ 304, 1; Schneider, Ehlers & Falco 1992; deflection sheet §4";
 const SRC_DELAY: &str = "Takahashi & Nakamura 2003, ApJ 595, 1039, arXiv:astro-ph/0305055 (T(y) in units of 4GM_Lz/c³); deflection sheet §4";
 const SRC_WAVE: &str = "Takahashi & Nakamura 2003, ApJ 595, 1039, arXiv:astro-ph/0305055 (point-lens F(w, y), e^{-iωt} convention); deflection sheet §4";
@@ -494,15 +496,16 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
 /// Flags for the wave-optics part: geometric-optics validity and the F method.
 fn wave_flags(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
     let mut flags = Vec::new();
-    // The interference phase wΔT is carried in f64: its absolute error is ~1e-16·wΔT rad.
+    // The interference phase wΔT (value, radians) is carried in f64: its absolute error is
+    // ~1e-16·wΔT rad, 1e-6 rad at 1e10 and 1e-2 rad at 1e14.
     flags.push(Flag::small_parameter(
         "interference_phase",
-        w * delta_t * f64::EPSILON,
-        1e-6,
-        1e-2,
+        w * delta_t,
+        1e10,
+        1e14,
         [
             "The interference phase wΔT is resolved (double precision).",
-            "The interference phase wΔT is large: its rounding error is this many radians; fine oscillations in F are only indicative.",
+            "The interference phase wΔT (this value, in radians) is large: its rounding error reaches 1e-6 to 1e-2 rad; fine oscillations in F are only indicative.",
             "The interference phase wΔT exceeds what double precision resolves: the oscillating part of F (the phase of the faint image) is not meaningful, only its envelope.",
         ],
     ));

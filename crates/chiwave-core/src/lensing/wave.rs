@@ -56,6 +56,12 @@ pub fn dimensionless_frequency(gm_redshifted: f64, frequency_hz: f64) -> f64 {
 /// # Formula
 /// Takahashi & Nakamura 2003, astro-ph/0305055; deflection sheet §4. x_m − y is computed as
 /// 2/(y + √(y² + 4)) to avoid cancellation at large y.
+///
+/// # Examples
+/// ```
+/// // y = 0: x_m = 1, φ_m = 1/2 (elementary).
+/// assert_eq!(chiwave_core::lensing::wave::phi_m(0.0), 0.5);
+/// ```
 pub fn phi_m(y: f64) -> f64 {
     let s = y.hypot(2.0);
     let xm = 0.5 * (y + s);
