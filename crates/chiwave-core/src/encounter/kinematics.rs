@@ -82,8 +82,10 @@ pub enum Orbit {
     J(f64),
 }
 
-/// Largest accepted b/(GM) or j.
-pub const ORBIT_MAX: f64 = 1e30;
+/// Largest accepted b/(GM) or j (microscopic encounters have b/(GM) ~ 1e45).
+pub const ORBIT_MAX: f64 = 1e60;
+/// Smallest accepted b/(GM) or j (far inside capture; keeps 1/j⁸ finite).
+pub const ORBIT_MIN: f64 = 1e-6;
 
 /// Derived kinematics at infinity (encounter sheet §0), M = 1, G = c = 1.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -124,7 +126,7 @@ impl Kinematics {
     ///
     /// # Errors
     /// [`InputError::OutOfRange`] naming `m1`, `m2`, `b` or `j` for non-positive, non-finite or
-    /// too-large values (b/(GM), j ≤ 1e30).
+    /// out-of-range values (1e-6 ≤ b/(GM), j ≤ 1e60).
     pub fn new(m1: f64, m2: f64, boost: Boost, orbit: Orbit) -> Result<Self, InputError> {
         crate::error::positive("m1", m1)?;
         crate::error::positive("m2", m2)?;
@@ -144,11 +146,11 @@ impl Kinematics {
             Orbit::J(j) => ("j", j, j * h / boost.p_inf, j),
         };
         check_orbit(input, value)?;
-        if !(b > 0.0 && b <= ORBIT_MAX && j > 0.0 && j <= ORBIT_MAX) {
+        if !(b >= ORBIT_MIN && b <= ORBIT_MAX && j >= ORBIT_MIN && j <= ORBIT_MAX) {
             return Err(InputError::OutOfRange {
                 field: input,
                 value,
-                allowed: format!("the derived b/(GM) and j must both lie in (0, {ORBIT_MAX:e}]"),
+                allowed: format!("the derived b/(GM) and j must both lie in [{ORBIT_MIN:e}, {ORBIT_MAX:e}]"),
             });
         }
         let e = h;
@@ -176,8 +178,8 @@ impl Kinematics {
 
 fn check_orbit(field: &'static str, x: f64) -> Result<(), InputError> {
     crate::error::positive(field, x)?;
-    if x > ORBIT_MAX {
-        return Err(InputError::OutOfRange { field, value: x, allowed: format!("0 < {field} ≤ {ORBIT_MAX:e}") });
+    if !(ORBIT_MIN..=ORBIT_MAX).contains(&x) {
+        return Err(InputError::OutOfRange { field, value: x, allowed: format!("{ORBIT_MIN:e} ≤ {field} ≤ {ORBIT_MAX:e}") });
     }
     Ok(())
 }

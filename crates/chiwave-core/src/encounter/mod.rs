@@ -105,7 +105,7 @@ impl Scale {
 }
 
 /// Largest accepted |q|/(√G M) (geometric Gaussian charge).
-pub const CHARGE_MAX: f64 = 1e100;
+pub const CHARGE_MAX: f64 = 1e40;
 
 impl EncounterRequest {
     /// Validates the request and derives the kinematics; `orbit_override` replaces b / j (sweeps).
@@ -113,7 +113,7 @@ impl EncounterRequest {
     /// # Errors
     /// [`InputError`] naming the field: missing or doubly given inputs, units that do not fit
     /// (a physical b or charge needs physical masses), values out of range
-    /// (0 < ν ≤ 1/4, 1 < γ ≤ 1e6, v ≥ 1e-8 c, 0 < b/(GM), j ≤ 1e30).
+    /// (0 < ν ≤ 1/4, 1 < γ ≤ 1e6, v ≥ 1e-8 c, 1e-6 ≤ b/(GM), j ≤ 1e60, |q|/(√G M) ≤ 1e40).
     pub fn setup_with(&self, orbit_override: Option<Orbit>) -> Result<Setup, InputError> {
         // Masses.
         let (m1, m2, gm_total) = match (&self.nu, &self.m1, &self.m2) {
@@ -880,7 +880,7 @@ pub const SWEEP_MAX_POINTS: usize = 20_000;
 ///
 /// # Errors
 /// The request's validation errors; [`InputError::OutOfRange`] naming `min`, `max` or `n`
-/// (0 < min < max ≤ 1e30, 2 ≤ n ≤ 20000); `force` must be gravity.
+/// (0 < min < max ≤ 1e60, 2 ≤ n ≤ 20000); `force` must be gravity.
 ///
 /// # Examples
 /// ```
