@@ -1,4 +1,6 @@
 //! Gravitational encounter tests. Each expected value names its source beside it.
+// Reference values are quoted with every digit the reference script printed.
+#![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
 use chiwave_core::encounter::kinematics::{Boost, Kinematics, Orbit};
 use chiwave_core::encounter::testbody::{self, TestBody};

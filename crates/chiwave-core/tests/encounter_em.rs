@@ -1,4 +1,6 @@
 //! Electromagnetic encounter tests (Gaussian units, c = 1). Sources beside each value.
+// Reference values are quoted with every digit the reference script printed.
+#![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
 use chiwave_core::encounter::em::{self, Darwin};
 use chiwave_core::encounter::kinematics::Boost;

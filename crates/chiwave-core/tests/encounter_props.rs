@@ -1,4 +1,6 @@
 //! Property tests: no input makes the encounter code panic; accepted inputs give finite numbers.
+// Reference values are quoted with every digit the reference script printed.
+#![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
 use chiwave_core::encounter::{chi_sweep, nr, EncounterRequest, EncounterResult, Force, SweepVar};
 use chiwave_core::units::Quantity;

@@ -146,7 +146,7 @@ impl Kinematics {
             Orbit::J(j) => ("j", j, j * h / boost.p_inf, j),
         };
         check_orbit(input, value)?;
-        if !(b >= ORBIT_MIN && b <= ORBIT_MAX && j >= ORBIT_MIN && j <= ORBIT_MAX) {
+        if !((ORBIT_MIN..=ORBIT_MAX).contains(&b) && (ORBIT_MIN..=ORBIT_MAX).contains(&j)) {
             return Err(InputError::OutOfRange {
                 field: input,
                 value,

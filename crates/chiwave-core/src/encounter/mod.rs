@@ -22,6 +22,9 @@
 //! body 1's incoming momentum. Electromagnetism is in **Gaussian units, c = 1**.
 //! Capture is a result, never an error.
 
+// `!(x > 0.0)` is deliberate throughout: unlike `x <= 0.0` it also rejects NaN.
+#![allow(clippy::neg_cmp_op_on_partial_ord)]
+
 pub mod em;
 pub mod eob;
 pub mod impulse;

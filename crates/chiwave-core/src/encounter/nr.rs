@@ -104,7 +104,7 @@ pub fn compare(rows: &[NrRow]) -> Result<Vec<NrComparison>, InputError> {
             if !(r.nu.is_finite() && r.nu > 0.0 && r.nu <= 0.25) {
                 return Err(bad("nu", r.nu, "0 < ν ≤ 1/4"));
             }
-            if !(r.sigma_chi.is_finite() && r.sigma_chi >= 0.0) || !r.chi.is_finite() {
+            if !(r.sigma_chi.is_finite() && r.sigma_chi >= 0.0 && r.chi.is_finite()) {
                 return Err(bad("sigma_chi", r.sigma_chi, "finite χ and σχ ≥ 0"));
             }
             let h = r.e_over_m;

@@ -20,6 +20,7 @@ pub const SERIES_SWITCH_V: f64 = 0.3;
 /// E(γ)/(π v) = Σ_k A[k] v^{2k}: Taylor coefficients by Cauchy integral in mpmath 1.3
 /// (mp.taylor, method = 'quad', radius 0.5 in v², mp.dps = 40), tests/reference/encounter_mpmath.py.
 /// The first three equal 37/15, 2393/840, 61703/10080 (encounter sheet §3.1).
+#[allow(clippy::excessive_precision)] // quoted with the digits the script printed
 const E_SERIES: [f64; 24] = [
     2.466666666666666667,
     2.84880952380952381,
