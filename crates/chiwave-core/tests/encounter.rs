@@ -422,3 +422,27 @@ fn nr_comparison_on_synthetic_rows() {
     assert_eq!(nr::compare(&bad).unwrap_err().field(), "E/M");
     let _ = REL_TRANSCRIBED;
 }
+
+#[test]
+fn impulse_on_shell_order_by_order() {
+    // Encounter sheet §2.1: (p_a + Δp_a)² = m_a² order by order in G. Through O(G³) this is
+    // 2 m1 u1·Δp1 = c_b² truncated = Q1² + 2Q1Q2, with Q1, Q2 written out here from the sheet
+    // (Westpfahl 1985; Kosower, Maybee, O'Connell 2018, arXiv:1811.10950); the radiative part is
+    // orthogonal to u1 and has u2·Δp1^rad = −u2·P_rad. Holds to rounding.
+    for (m1, m2, g, b) in [(1.0, 3.0, 1.1, 50.0), (0.3, 0.7, 2.5, 400.0), (0.5, 0.5, 20.0, 1e4)] {
+        let r = impulse_for(m1, m2, g, b);
+        let k = &r.kinematics;
+        let (m1, m2, p, b) = (k.m1, k.m2, k.boost.p_inf, k.b_over_gm);
+        let q1 = 2.0 * m1 * m2 * (2.0 * g * g - 1.0) / (p * b);
+        let q2 = 0.75 * PI * (5.0 * g * g - 1.0) * m1 * m2 / (p * b * b);
+        let want = q1 * q1 + 2.0 * q1 * q2;
+        let c = r.covariant.conservative;
+        // body 1: u1·Δp1 = c_u1 + γ c_u2; body 2 (Δp2 = −Δp1): u2·Δp2 = −(γ c_u1 + c_u2).
+        assert!(rel_diff(2.0 * m1 * (c.c_u1 + g * c.c_u2), want) < 1e-12, "body 1");
+        assert!(rel_diff(-2.0 * m2 * (g * c.c_u1 + c.c_u2), want) < 1e-12, "body 2");
+        let rr = r.covariant.radiative;
+        let eps = k.nu * k.nu * radiated::e_of_boost(&k.boost) / b.powi(3);
+        assert!((rr.c_u1 + g * rr.c_u2).abs() <= 1e-15 * rr.c_u2.abs() * g, "u1·Δp1^rad");
+        assert!(rel_diff(g * rr.c_u1 + rr.c_u2, -eps) < 1e-12, "u2·Δp1^rad");
+    }
+}

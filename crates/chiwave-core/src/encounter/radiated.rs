@@ -60,7 +60,7 @@ const E_SERIES: [f64; 24] = [
 ///
 /// # Domain
 /// 1 ≤ γ ≤ 1e40. Special cases: E(1) = 0; γ < 1 or NaN → NaN (callers validate first);
-/// γ → ∞: E ∝ γ³ (dominated by (35/4)γ³... terms).
+/// γ → ∞: E/π → (35/8)(1 + 2 ln 2) γ³ (read off the formula: the ln γ terms of f₂ and f₃ cancel).
 ///
 /// # Examples
 /// ```
