@@ -438,13 +438,12 @@ fn spectrum_parts(sys: &EmSystem, d: &Dir, omega: f64) -> [[Complex64; 2]; 2] {
     let a2 = [Complex64::new(0.0, -2.0 * s2 * x_k0(k2) / g), Complex64::new(-2.0 * s2 * x_k1(k2), 0.0)];
     let phase = Complex64::from_polar(1.0, -omega * d.n[1] * b);
     let k2f = d.kappa * d.kappa;
-    let mut out = [[Complex64::new(0.0, 0.0); 2]; 2];
-    for k in 0..2 {
+    let part = |k: usize| {
         let (c1, c2) = d.coefficients(v, k);
-        out[0][k] = phase * (a1[0] * c1[0] + a1[1] * c1[1]) * (sys.q1 / k2f);
-        out[1][k] = (a2[0] * c2[0] + a2[1] * c2[1]) * sys.q2;
-    }
-    out
+        (phase * (a1[0] * c1[0] + a1[1] * c1[1]) * (sys.q1 / k2f), (a2[0] * c2[0] + a2[1] * c2[1]) * sys.q2)
+    };
+    let (p0, p1) = (part(0), part(1));
+    [[p0.0, p1.0], [p0.1, p1.1]]
 }
 
 /// Closed-form energy spectrum per unit solid angle, dE/(dω dΩ) with the D² absorbed.
@@ -598,7 +597,6 @@ fn adaptive4(
             }
         }
         if ok || count >= max_intervals || m <= a || m >= b {
-            COUNT.with(|c| c.set(c.get() + 1));
             for k in 0..4 {
                 sum[k] += ql[k] + qr[k];
                 err[k] += diff[k];
@@ -612,7 +610,6 @@ fn adaptive4(
     (sum, err)
 }
 
-thread_local!(pub static COUNT: std::cell::Cell<usize> = const { std::cell::Cell::new(0) });
 /// Differences below this multiple of ∫|f| over an interval are rounding, not truncation.
 const ROUNDING_FLOOR: f64 = 1e-14;
 /// Relative tolerance of the cross-term u-integrals (against their Cauchy–Schwarz bounds).
@@ -796,7 +793,7 @@ pub fn energies(sys: &EmSystem) -> EmEnergies {
 }
 
 /// Sphere nodes per dimension: 40 + 16 log10 γ (enough for a relative error below 1e-10 on the
-/// interference for 1 < γ ≤ [`GAMMA_MAX`], checked against doubled rules in the tests).
+/// interference for 1 < γ ≤ [`GAMMA_MAX`]: measured against 140 × 140 rules, 2e-11 at γ = 1000).
 fn sphere_size(gamma: f64) -> usize {
     (40.0 + 16.0 * gamma.log10()).ceil() as usize
 }
@@ -841,8 +838,15 @@ pub fn energies_with(sys: &EmSystem, n_y: usize, n_psi: usize) -> EmEnergies {
 /// Angle-integrated spectrum dE/dω (closed-form Bessel spectrum integrated over the sphere).
 ///
 /// # Formula
-/// dE/dω = ∫dΩ |E~(ω)|²/(4π²) with [`spectrum`]'s E~ (sheet §2), on the sphere rule of
-/// [`energies`]; ∫_0^∞ dω of it is `energies(sys).total_flux`.
+/// dE/dω = ∫dΩ |E~(ω)|²/(4π²) with [`spectrum`]'s E~ (sheet §2); ∫_0^∞ dω of it is
+/// `energies(sys).total_flux`. Body 1's own part |E~1|² uses a rule clustered on the forward
+/// cone (48 × 24 nodes); body 2's part and the interference use the band rule of [`energies`],
+/// refined with ω (up to 320 × 320 nodes) to follow the interference phase e^{−iω n_y b}.
+///
+/// # Accuracy
+/// Measured against rules with twice the nodes: relative error ≤ 1e-10 for γ ≤ 100 at every
+/// ω, up to ≈ 5e-6 at γ = 1000 (ω ≳ 300 v/b). ∫dω reproduces `total_flux` to 1e-11 at
+/// γ = 1.5 and 4 (tests).
 ///
 /// # Domain
 /// ω ≥ 0 (negative ω gives the value at |ω|).
@@ -855,21 +859,53 @@ pub fn energies_with(sys: &EmSystem, n_y: usize, n_psi: usize) -> EmEnergies {
 /// assert!(d[0] > d[1] && d[1] > 0.0);
 /// ```
 pub fn spectrum_integrated(sys: &EmSystem, omega: &[f64]) -> Vec<f64> {
+    let n0 = sphere_size(sys.gamma);
+    let x_cap = 40.0 * sys.gamma;
+    spectrum_integrated_by(sys, omega, |w| {
+        // The interference carries the phase e^{−iω n_y b}: resolve it with ~10 √(ω b/v)
+        // nodes per dimension while it matters (k2 = ω b/(γ v) ≲ 40), at most 320.
+        let x = (w * sys.b / sys.v()).min(x_cap);
+        n0.max((10.0 * x.sqrt()).ceil() as usize).min(320)
+    })
+}
+
+/// [`spectrum_integrated`] with a fixed `n` × `n` band rule (interference and body 2) at every
+/// ω; for convergence studies.
+pub fn spectrum_integrated_with(sys: &EmSystem, omega: &[f64], n: usize) -> Vec<f64> {
+    spectrum_integrated_by(sys, omega, |_| n)
+}
+
+fn spectrum_integrated_by(sys: &EmSystem, omega: &[f64], band_size: impl Fn(f64) -> usize) -> Vec<f64> {
     let forward = sphere_nodes_forward(sys, N_SIGMA, N_ALPHA);
-    let n = sphere_size(sys.gamma);
-    let band = sphere_nodes(sys, n, n);
-    let sum_over = |nodes: &[(Dir, f64)], w: f64, part: fn(&[[Complex64; 2]; 2]) -> f64| -> f64 {
-        nodes.iter().map(|(d, wt)| wt * part(&spectrum_parts(sys, d, w))).sum::<f64>()
-    };
+    let mut band_cache: Vec<(usize, Vec<(Dir, f64)>)> = Vec::new();
     omega
         .iter()
         .map(|&w| {
             let w = w.abs();
+            let n = band_size(w);
+            let idx = match band_cache.iter().position(|(k, _)| *k == n) {
+                Some(i) => i,
+                None => {
+                    band_cache.push((n, sphere_nodes(sys, n, n)));
+                    band_cache.len() - 1
+                }
+            };
+            let band = &band_cache[idx].1;
             // |E~1|² on the forward rule; |E~2|² + 2 Re(E~1·E~2*) on the band rule.
-            let own1 = sum_over(&forward, w, |a| a[0][0].norm_sqr() + a[0][1].norm_sqr());
-            let rest = sum_over(&band, w, |a| {
-                (0..2).map(|k| a[1][k].norm_sqr() + 2.0 * (a[0][k] * a[1][k].conj()).re).sum()
-            });
+            let own1: f64 = forward
+                .iter()
+                .map(|(d, wt)| {
+                    let a = spectrum_parts(sys, d, w);
+                    wt * (a[0][0].norm_sqr() + a[0][1].norm_sqr())
+                })
+                .sum();
+            let rest: f64 = band
+                .iter()
+                .map(|(d, wt)| {
+                    let a = spectrum_parts(sys, d, w);
+                    wt * (0..2).map(|k| a[1][k].norm_sqr() + 2.0 * (a[0][k] * a[1][k].conj()).re).sum::<f64>()
+                })
+                .sum();
             (own1 + rest) / (4.0 * PI * PI)
         })
         .collect()
