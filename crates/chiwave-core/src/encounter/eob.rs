@@ -356,13 +356,14 @@ fn deflate(c: &[f64], root: f64) -> Vec<f64> {
     s.iter().map(|v| -v).collect()
 }
 
-/// Root of a polynomial that changes sign on (a, b) and is monotone there.
+/// Root of a polynomial that changes sign on (a, b) and is monotone there: Newton's method,
+/// safeguarded by the bracket (a bisection step whenever Newton leaves the bracket or fails to
+/// halve |f|).
 fn solve_bracket(c: &[f64], dc: &[f64], mut a: f64, mut b: f64) -> f64 {
-    let fa = peval(c, a);
-    let sa = fa > 0.0;
-    let mut x = 0.5 * (a + b);
-    let mut last_width = b - a;
-    let mut use_newton = true;
+    let sa = peval(c, a) > 0.0;
+    let mid = |a: f64, b: f64| if a > 0.0 && b > 16.0 * a { (a * b).sqrt() } else { 0.5 * (a + b) };
+    let mut x = mid(a, b);
+    let mut f_prev = f64::INFINITY;
     for _ in 0..300 {
         let fx = peval(c, x);
         if fx == 0.0 || !fx.is_finite() {
@@ -373,58 +374,60 @@ fn solve_bracket(c: &[f64], dc: &[f64], mut a: f64, mut b: f64) -> f64 {
         } else {
             b = x;
         }
-        let width = b - a;
-        if width <= 4.0 * f64::EPSILON * a.abs().max(b.abs()) || width <= f64::MIN_POSITIVE {
+        if b - a <= 4.0 * f64::EPSILON * a.abs().max(b.abs()) || b - a <= f64::MIN_POSITIVE {
             return 0.5 * (a + b);
         }
-        if width > 0.5 * last_width {
-            use_newton = false;
-        }
-        last_width = width;
         let d = peval(dc, x);
         let xn = x - fx / d;
-        x = if use_newton && d != 0.0 && xn > a && xn < b {
-            xn
-        } else if a > 0.0 && b > 16.0 * a {
-            (a * b).sqrt()
+        if d != 0.0 && xn > a && xn < b && fx.abs() <= 0.5 * f_prev {
+            if (xn - x).abs() <= 4.0 * f64::EPSILON * x.abs() {
+                return xn;
+            }
+            x = xn;
         } else {
-            0.5 * (a + b)
-        };
-        use_newton = true;
+            x = mid(a, b);
+        }
+        f_prev = fx.abs();
     }
     0.5 * (a + b)
 }
 
 /// All real roots of `c` in (lo, hi), sorted (double roots appear once).
 fn real_roots(c: &[f64], lo: f64, hi: f64) -> Vec<f64> {
+    roots_and_critical(c, lo, hi).0
+}
+
+/// The real roots of `c` in (lo, hi) and those of its derivative (both sorted): isolation by the
+/// critical points (the roots of c', found recursively), then a safeguarded Newton on each
+/// monotone piece.
+fn roots_and_critical(c: &[f64], lo: f64, hi: f64) -> (Vec<f64>, Vec<f64>) {
     let c = trim(c);
     let mut out = Vec::new();
     if c.len() < 2 {
-        return out;
+        return (out, Vec::new());
     }
     if c.len() == 2 {
         let x = -c[0] / c[1];
         if x > lo && x < hi {
             out.push(x);
         }
-        return out;
+        return (out, Vec::new());
     }
     let dc = pderiv(c);
-    let mut pts = vec![lo];
-    pts.extend(real_roots(&dc, lo, hi));
-    pts.push(hi);
-    for k in 0..pts.len() - 1 {
-        let (a, b) = (pts[k], pts[k + 1]);
-        let (fa, fb) = (peval(c, a), peval(c, b));
-        if k > 0 && fa == 0.0 {
-            out.push(a);
-            continue;
+    let crit = real_roots(&dc, lo, hi);
+    let mut prev = lo;
+    let mut f_prev = peval(c, lo);
+    for (k, &b) in crit.iter().chain(std::iter::once(&hi)).enumerate() {
+        let fb = peval(c, b);
+        if k > 0 && f_prev == 0.0 {
+            out.push(prev);
+        } else if f_prev * fb < 0.0 {
+            out.push(solve_bracket(c, &dc, prev, b));
         }
-        if fa * fb < 0.0 {
-            out.push(solve_bracket(c, &dc, a, b));
-        }
+        prev = b;
+        f_prev = fb;
     }
-    out
+    (out, crit)
 }
 
 /// Upper bound of the positive roots (Cauchy).
@@ -463,6 +466,9 @@ fn radicand(pot: &Potential, j: f64) -> Vec<f64> {
 
 /// First positive maximum of w(u) (∞ when w' > 0 for all u > 0).
 fn u_w(pot: &Potential) -> f64 {
+    if pot.w.iter().all(|&x| x >= 0.0) {
+        return f64::INFINITY;
+    }
     let mut c = vec![0.0];
     c.extend_from_slice(&pot.w);
     let dw = pderiv(&c);
@@ -489,10 +495,10 @@ fn shape(pot: &Potential, j: f64, uw: f64) -> Result<Shape, InputError> {
             reason: "the radial potential overflows double precision for these inputs".into(),
         });
     }
-    let roots = real_roots(&r, 0.0, hi);
+    let (roots, crit) = roots_and_critical(&r, 0.0, hi);
     let dr = pderiv(&r);
     let d2r = pderiv(&dr);
-    let ub = real_roots(&dr, 0.0, hi).into_iter().find(|&x| peval(&d2r, x) > 0.0);
+    let ub = crit.into_iter().find(|&x| peval(&d2r, x) > 0.0);
     let u0 = roots.first().copied();
     let u1 = roots.get(1).copied();
     let captured = match u0 {
@@ -603,13 +609,17 @@ fn angle(pot: &Potential, sh: &Shape, j: f64) -> Result<f64, InputError> {
     let near = sh.u1.filter(|&u1| u1 - u0 < NEAR_CAPTURE_GAP * u0);
     let rl = rules();
     if let Some(u1) = near {
+        // outer part u ∈ [0, u0/2]: R is bounded away from 0, plain rule in u;
+        // inner part u ∈ [u0/2, u0]: u = u0 − ε sinh²t, composite rule in t.
         let nf = NearForm::new(&sh.r, u0, u1, j);
-        let t_end = nf.t_of(0.0);
+        let t_end = nf.t_of(0.5 * u0);
         let f = |t: f64| nf.dphi(t);
+        let fo = |u: f64| j / peval(&sh.r, u).sqrt();
         let mut m = (t_end / 1.5).ceil().max(1.0) as usize;
-        for _ in 0..6 {
-            let lo = gl_panels(&f, 0.0, t_end, m, &rl[0]);
-            let hi = gl_panels(&f, 0.0, t_end, m, &rl[1]);
+        for k in 0..5 {
+            let (ra, rb) = (&rl[k.min(rl.len() - 2)], &rl[(k + 1).min(rl.len() - 1)]);
+            let lo = gl_panels(&f, 0.0, t_end, m, &rl[0]) + gl(&fo, 0.0, 0.5 * u0, ra);
+            let hi = gl_panels(&f, 0.0, t_end, m, &rl[1]) + gl(&fo, 0.0, 0.5 * u0, rb);
             let chi_lo = 2.0 * lo - PI;
             let chi_hi = 2.0 * hi - PI;
             if chi_hi.is_finite() && (chi_hi - chi_lo).abs() <= REL_ANGLE * chi_hi.abs().max(1.0) {
@@ -727,8 +737,9 @@ fn critical(pot: &Potential, uw: f64, j_captured: Option<f64>) -> Result<Option<
 /// §7). Numerically, with u = u0 sin θ the angle is written without cancellation as
 /// χ/2 = ∫_0^{π/2} D/(√(1−D)(1+√(1−D))) dθ, D = [w(u0) − w(u)]/[(u0−u) j² (u0+u)], by
 /// Gauss–Legendre rules of increasing size until two agree to 1e-12. Near capture (the next
-/// root u1 of the radicand within 0.25 u0) the radicand is factored as (u0−u)(u1−u)P(u) and
-/// u = u0 − (u1−u0) sinh²t removes the logarithmic near-singularity (composite rule in t).
+/// root u1 of the radicand within 0.25 u0) the radicand is factored as (u0−u)(u1−u)P(u) and,
+/// on u ∈ [u0/2, u0], u = u0 − (u1−u0) sinh²t removes the logarithmic near-singularity
+/// (composite rule in t); the outer part u ∈ [0, u0/2] is integrated directly in u.
 ///
 /// # Domain
 /// gamma > 1, 0 < nu ≤ 1/4, j > 0, chi = [χ_1, χ_2, χ_3, …] (3 to 8 coefficients of χ/2 in 1/j,
