@@ -24,10 +24,13 @@
 //!
 //! # Which χ_3 to pass
 //! Pass the **radiation-reacted total** χ_3 = χ_3^cons + χ_3^rad (encounter sheet §1.3–1.4).
-//! Damour & Rettegno 2023 (arXiv:2211.01399) build their preferred ("radiation-reacted") w
-//! potential from the radiation-reacted angle and find it agrees best with numerical-relativity
-//! scattering angles; we follow them. Besides, with the conservative χ_3 alone w_3 turns negative
-//! at high energy (w_3 < 0 for γ ≳ 2.5 at ν = 1/4, because χ_3^cons ~ −8γ³ ln 2γ, sheet pitfall 5),
+//! Damour & Rettegno 2023 (arXiv:2211.01399) compare w potentials built from PM angles with
+//! numerical-relativity scattering and report the best agreement for the radiation-reacted
+//! information (their abstract; they also extract a radiation-reacted potential from NR); we
+//! follow them and map the radiation-reacted angle. (Only that summary was consulted here; their
+//! equations are not transcribed.) Besides, with the conservative χ_3 alone w_3 turns negative
+//! at high energy (w_3 < 0 for γ > 2.317 at ν = 1/4 and γ > 4.041 at ν = 0.1, mpmath 1.3 root of
+//! w_3(γ) with the sheet formulas; because χ_3^cons ~ −8γ³ ln 2γ, sheet pitfall 5),
 //! which gives the truncated potential an unphysical repulsive core; with the total χ_3, w_3 > 0
 //! throughout (tested on a grid in `tests/eob.rs`).
 //!
