@@ -7,6 +7,7 @@
 use crate::deflection::{LightRequest, LightResult};
 use crate::error::InputError;
 use crate::lensing::{LensRequest, LensResult};
+use crate::waveform::{WaveformRequest, WaveformResult};
 use serde::{Deserialize, Serialize};
 
 /// Any request, tagged by `kind`.
@@ -15,6 +16,7 @@ use serde::{Deserialize, Serialize};
 pub enum Request {
     Light(LightRequest),
     Lens(LensRequest),
+    Waveform(WaveformRequest),
 }
 
 /// The result of any request (serialised without a tag: the request's kind says what it is).
@@ -23,6 +25,7 @@ pub enum Request {
 pub enum Response {
     Light(Box<LightResult>),
     Lens(Box<LensResult>),
+    Waveform(Box<WaveformResult>),
 }
 
 /// Evaluates any request.
@@ -33,6 +36,7 @@ pub fn evaluate(req: &Request) -> Result<Response, InputError> {
     Ok(match req {
         Request::Light(r) => Response::Light(Box::new(r.evaluate()?)),
         Request::Lens(r) => Response::Lens(Box::new(r.evaluate()?)),
+        Request::Waveform(r) => Response::Waveform(Box::new(r.evaluate()?)),
     })
 }
 
