@@ -21,7 +21,7 @@ def e_over_pi(g):
     return f1 + f2 * mp.log((g + 1) / 2) + f3 * g * mp.acosh(g) / (2 * p)
 
 
-for g in ["1.0001", "1.001", "1.01", "1.1", "1.5", "2", "3", "5", "10"]:
+for g in ["1.0001", "1.001", "1.01", "1.02", "1.1", "1.5", "2", "3", "5", "10"]:
     print(f"gamma={g}: E(gamma) = {mp.nstr(mp.pi * e_over_pi(g), 30)}")
 
 v = sp.symbols('v', positive=True)

@@ -332,21 +332,24 @@ impl RestKernel {
         h
     }
 
-    /// Time scales and centres of the two parts, for quadrature in u: (centre, scale) pairs.
-    pub fn features(&self) -> [(f64, f64); 2] {
-        let wl_scale = self.b * self.one_m_nxv / self.v;
-        let mut f_scale = f64::INFINITY;
-        let mut c_min = f64::INFINITY;
-        let mut c_max = f64::NEG_INFINITY;
-        for nd in &self.nodes {
+    /// Centres and time scales (centre, scale) of the features of ḣ(u), for quadrature in u:
+    /// the worldline part (centre −n_y b, scale b(1 − n_x v)/v) and the field-stress slices at the
+    /// two ends of the Feynman parameter and the narrowest slice.
+    pub fn features(&self) -> Vec<(f64, f64)> {
+        let mut out = vec![(-self.ny_b, self.b * self.one_m_nxv / self.v)];
+        let slice = |nd: &FieldNode| {
             let c = -nd.s1 / (2.0 * nd.s2);
             let d2 = nd.s0 / nd.s2 - c * c;
-            f_scale = f_scale.min(d2.max(0.0).sqrt());
-            c_min = c_min.min(c);
-            c_max = c_max.max(c);
+            (c, d2.max(0.0).sqrt())
+        };
+        if let (Some(first), Some(last)) = (self.nodes.first(), self.nodes.last()) {
+            out.push(slice(first));
+            out.push(slice(last));
         }
-        let _ = c_max;
-        [(-self.ny_b, wl_scale), (c_min.min(0.0).max(-self.b.abs() * 2.0), f_scale)]
+        if let Some(narrow) = self.nodes.iter().map(slice).min_by(|a, b| a.1.total_cmp(&b.1)) {
+            out.push(narrow);
+        }
+        out
     }
 }
 
@@ -467,10 +470,9 @@ impl DirectionWaveform {
     }
 
     /// Centres and scales (in this frame's u) of the worldline and field parts.
-    pub(crate) fn features(&self) -> [(f64, f64); 2] {
-        let f = self.kernel.features();
+    pub(crate) fn features(&self) -> Vec<(f64, f64)> {
         let d = self.map.delta;
-        [(f[0].0 / d + self.map.shift, f[0].1 / d), (f[1].0 / d + self.map.shift, f[1].1 / d)]
+        self.kernel.features().into_iter().map(|(c, l)| (c / d + self.map.shift, l / d)).collect()
     }
 }
 

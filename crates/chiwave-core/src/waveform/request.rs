@@ -405,7 +405,7 @@ impl WaveformRequest {
         let memory_bt: MemoryPair = memory_braginsky_thorne(&sys, self.frame, theta, phi)?.into();
         let closed = radiated_closed_form(&sys, self.frame);
         let (e_flux, p_flux) = if self.energy_flux {
-            let mut it = SkyIntegrator::new(&sys, self.frame, SkyOptions::default())?;
+            let mut it = SkyIntegrator::new(&sys, self.frame, SkyOptions::for_gamma(gamma))?;
             let p = it.run();
             (Some(p.energy), Some(p.momentum))
         } else {
