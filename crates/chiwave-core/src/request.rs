@@ -16,7 +16,7 @@ use serde::{Deserialize, Serialize};
 pub enum Request {
     Light(LightRequest),
     Lens(LensRequest),
-    Waveform(WaveformRequest),
+    Waveform(Box<WaveformRequest>),
 }
 
 /// The result of any request (serialised without a tag: the request's kind says what it is).

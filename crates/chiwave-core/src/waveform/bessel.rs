@@ -46,6 +46,7 @@ mod tests {
     use crate::numeric::rel_diff;
 
     #[test]
+    #[allow(clippy::excessive_precision)] // values transcribed from mpmath as printed
     fn against_mpmath() {
         // mpmath 1.3, mp.dps = 30, tests/reference/waveform_bessel.py: besselk(ν, x)·e^x
         let cases = [

@@ -3,6 +3,9 @@
 //! Sources: waveform reference sheet §0 (frames, polarisation basis, the Doppler factor δ and the
 //! polarisation rotation ψ from the Lorentz invariance of h_{μν} m^μ m^ν, origin shift rule of §8).
 
+// Index loops are kept where the indices are tensor indices (clearer than iterator chains).
+#![allow(clippy::needless_range_loop)]
+
 use crate::error::{finite, positive, InputError};
 use serde::{Deserialize, Serialize};
 

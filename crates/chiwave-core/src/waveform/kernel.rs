@@ -5,6 +5,9 @@
 //! equations in harmonic gauge; Landau & Lifshitz, *Classical Theory of Fields*, §96; Poisson &
 //! Will, *Gravity* (2014), ch. 6), checked by the sheet's §7 and by this crate's tests.
 
+// Index loops are kept where the indices are tensor indices (clearer than iterator chains).
+#![allow(clippy::needless_range_loop)]
+
 use super::frames::{Basis, Binary, BoostMap, Frame};
 use crate::error::{finite, InputError};
 use crate::numeric::gauss_legendre;

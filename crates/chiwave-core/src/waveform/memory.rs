@@ -5,6 +5,9 @@
 //! Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (recalled in sheet §3; the prefactor
 //! 2GQ²/π is the one the sheet's numerical check fixed — recalled as GQ²/π).
 
+// Index loops are kept where the indices are tensor indices (clearer than iterator chains).
+#![allow(clippy::needless_range_loop)]
+
 use super::frames::{Basis, Binary, Frame};
 use crate::error::InputError;
 

@@ -5,6 +5,9 @@
 //! Kepler hyperbola in the eccentric-anomaly parametrisation (sheet §5; e.g. Landau & Lifshitz,
 //! *Mechanics*, §15).
 
+// Index loops are kept where the indices are tensor indices (clearer than iterator chains).
+#![allow(clippy::needless_range_loop)]
+
 use super::frames::{Basis, Binary, Frame};
 use super::kernel::Strain;
 use crate::error::{finite, InputError};

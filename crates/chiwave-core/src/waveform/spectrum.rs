@@ -10,6 +10,9 @@
 //! dE/(dω dΩ) = D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (sheet §1). In a boosted frame,
 //! dE'/(dω' dΩ') = δ² |ḣ̃_A(ω'/δ)|²/(16π²).
 
+// Index loops are kept where the indices are tensor indices (clearer than iterator chains).
+#![allow(clippy::needless_range_loop)]
+
 use super::bessel::k01_scaled;
 use super::energy::SkyIntegrator;
 use super::frames::{Binary, Frame};
@@ -76,7 +79,7 @@ impl DirectionWaveform {
     /// D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (sheet §1); δ²|ḣ̃_A(ω/δ)|²/(16π²) in a boosted frame.
     pub fn spectrum(&self, omega: f64) -> f64 {
         let pi2 = std::f64::consts::PI * std::f64::consts::PI;
-        if !(omega > 0.0) {
+        if omega.is_nan() || omega <= 0.0 {
             let m = self.memory();
             return (m[0] * m[0] + m[1] * m[1]) / (16.0 * pi2);
         }
