@@ -348,3 +348,38 @@ fn request_validation() {
     assert!(DirectionWaveform::new(&Binary::new(1.0, 1.0, 2.0, 9.0).unwrap(), Frame::Cm, f64::NAN, 0.0, 40).is_err());
     assert!(waveform(&Binary::new(1.0, 1.0, 2.0, 9.0).unwrap(), Frame::Cm, 1.0, 0.0, &[f64::NAN]).is_err());
 }
+
+/// No panic and no NaN for arbitrary finite-or-not inputs: errors are values (proptest, 64 cases).
+mod no_panic {
+    use super::*;
+    use proptest::prelude::*;
+    proptest! {
+        #![proptest_config(ProptestConfig::with_cases(64))]
+        #[test]
+        fn valid_ranges_give_finite_strain(g in 1.0000001f64..1e4, b in 1.0f64..1e12, th in 0.0f64..3.14159,
+                                           ph in -7.0f64..7.0, u0 in -1e15f64..0.0, m1 in 1e-6f64..1.0) {
+            let s = Binary::new(m1, 1.0 - m1 + 1e-9, g, b).unwrap();
+            for frame in [Frame::Rest2, Frame::Cm] {
+                let w = DirectionWaveform::new(&s, frame, th, ph, DEFAULT_X_NODES).unwrap();
+                for u in [u0, 0.0, -u0, u0 * 1e-9] {
+                    let (h, r) = (w.strain(u), w.strain_rate(u));
+                    prop_assert!(h.iter().chain(&r).all(|x| x.is_finite()), "γ={} b={} u={}: {:?} {:?}", g, b, u, h, r);
+                }
+            }
+        }
+
+        #[test]
+        fn request_never_panics(g in prop::num::f64::ANY, b in prop::num::f64::ANY, th in prop::num::f64::ANY,
+                                ph in prop::num::f64::ANY, u0 in prop::num::f64::ANY, u1 in prop::num::f64::ANY) {
+            let r = WaveformRequest {
+                force: WaveformForce::Gravity, m1: Some(0.3.into()), m2: Some(0.7.into()), nu: None, total_mass: None,
+                gamma: Some(g), v: None, b: b.into(), theta: th, phi: ph, angle_unit: None, frame: Frame::Cm,
+                u_min: u0, u_max: u1, samples: 3, distance: None, q1: None, q2: None, detector: None,
+                spectrum: None, energy_flux: false, quadrupole: true,
+            };
+            if let Ok(res) = r.evaluate() {
+                prop_assert!(res.h_plus.iter().chain(&res.h_cross).all(|x| x.is_finite()));
+            }
+        }
+    }
+}

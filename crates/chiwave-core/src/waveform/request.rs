@@ -435,6 +435,14 @@ impl WaveformRequest {
             "f_char = v/(2πb) is a rule of thumb for v ≪ c (not fitted); forward-beamed radiation is Doppler-raised by about γ/(1 − v cos θ).",
         ));
 
+        if self.energy_flux && gamma > 3.0 {
+            flags.push(Flag::new(
+                "flux_resolution",
+                Level::Caution,
+                Some(gamma),
+                "Above γ = 3 the sky grid of the flux integral was not tuned to 1e-10 (tests reach 1e-10 for γ ≤ 2 and about 1e-8 at γ = 3); compare e_rad_flux with e_rad_closed.",
+            ));
+        }
         // Physical values.
         let physical = match (ms.l1_m, ms.l2_m) {
             (Some(l1), Some(l2)) => {
