@@ -8,6 +8,7 @@ use crate::deflection::{LightRequest, LightResult};
 use crate::encounter::{EncounterRequest, EncounterResult};
 use crate::error::InputError;
 use crate::lensing::{LensRequest, LensResult};
+use crate::waveform::{WaveformRequest, WaveformResult};
 use serde::{Deserialize, Serialize};
 
 /// Any request, tagged by `kind`.
@@ -17,6 +18,7 @@ pub enum Request {
     Light(LightRequest),
     Lens(LensRequest),
     Encounter(EncounterRequest),
+    Waveform(Box<WaveformRequest>),
 }
 
 /// The result of any request (serialised without a tag: the request's kind says what it is).
@@ -26,6 +28,7 @@ pub enum Response {
     Light(Box<LightResult>),
     Lens(Box<LensResult>),
     Encounter(Box<EncounterResult>),
+    Waveform(Box<WaveformResult>),
 }
 
 /// Evaluates any request.
@@ -37,6 +40,7 @@ pub fn evaluate(req: &Request) -> Result<Response, InputError> {
         Request::Light(r) => Response::Light(Box::new(r.evaluate()?)),
         Request::Lens(r) => Response::Lens(Box::new(r.evaluate()?)),
         Request::Encounter(r) => Response::Encounter(Box::new(r.evaluate()?)),
+        Request::Waveform(r) => Response::Waveform(Box::new(r.evaluate()?)),
     })
 }
 
