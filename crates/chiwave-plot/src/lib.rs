@@ -239,6 +239,9 @@ pub struct HoverSeries {
 /// Everything the page needs for one figure.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct Rendered {
+    pub title: String,
+    pub x_label: String,
+    pub y_label: String,
     pub svg: String,
     pub frame: PlotFrame,
     pub series: Vec<HoverSeries>,
@@ -704,7 +707,7 @@ pub fn render_for_page(fig: &Figure) -> Result<Rendered, PlotError> {
             y: s.points.iter().map(|p| p.map(|p| p.1)).collect(),
         })
         .collect();
-    Ok(Rendered { svg, frame, series })
+    Ok(Rendered { title: fig.title.clone(), x_label: fig.x.label.clone(), y_label: fig.y.label.clone(), svg, frame, series })
 }
 
 #[cfg(test)]
