@@ -27,6 +27,8 @@ after(async () => {
 /** Sets a text input and fires the input event, as typing does. */
 async function type(selector, text) {
   await page.fill(selector, text);
+  // The page recomputes on the next animation frame; wait for it.
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
 }
 
 async function exactAlpha() {
@@ -120,7 +122,7 @@ test('exports: SVG, PNG and CSV downloads work offline', async () => {
   const png = fs.readFileSync(await pngDl.path());
   assert.deepEqual([...png.subarray(1, 4)], [0x50, 0x4e, 0x47], 'PNG signature');
   const [csvDl] = await Promise.all([page.waitForEvent('download'), page.locator('#view-light').getByRole('button', { name: 'CSV' }).click()]);
-  assert.match(fs.readFileSync(await csvDl.path(), 'utf8'), /^quantity,value,unit,source/);
+  assert.match(fs.readFileSync(await csvDl.path(), 'utf8'), /^quantity,value,unit,relative_error,source/);
 });
 
 test('scenario picker loads a built-in scenario', async () => {

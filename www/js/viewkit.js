@@ -59,7 +59,8 @@ export function makeView(spec, api) {
   const tbody = el('tbody');
   const table = el('table', { class: 'results', 'data-role': 'results' },
     el('thead', {}, el('tr', {}, el('th', { text: 'Quantity' }), el('th', { text: 'Value', style: 'text-align:right' }),
-      el('th', { text: 'Unit' }), el('th', { class: 'src-col', text: 'Source' }))), tbody);
+      el('th', { text: 'Unit' }), el('th', { text: 'Rel. error', style: 'text-align:right', title: 'relative difference to the exact value' }),
+      el('th', { class: 'src-col', text: 'Source' }))), tbody);
   const flagBody = el('tbody');
   const flagTable = el('table', { class: 'results flags', 'data-role': 'flags' },
     el('thead', {}, el('tr', {}, el('th', { text: 'Regime check' }), el('th', { text: 'Level' }), el('th', { text: 'Value', style: 'text-align:right' }), el('th', { text: 'What it means' }))), flagBody);
@@ -139,13 +140,14 @@ export function makeView(spec, api) {
   function renderTable(rows) {
     const trs = [];
     for (const row of rows) {
-      if (row.section) { trs.push(el('tr', { class: 'section' }, el('td', { colspan: '4', text: row.section }))); continue; }
+      if (row.section) { trs.push(el('tr', { class: 'section' }, el('td', { colspan: '5', text: row.section }))); continue; }
       const src = row.source || null;
       trs.push(el('tr', { 'data-key': row.key || '' },
         el('td', { text: row.label }),
         el('td', { class: 'num', tabindex: src ? '0' : null, 'data-source': src, 'data-value': exact(row.value), 'data-key': row.key || null },
           typeof row.value === 'number' || row.value === null ? fmt(row.value, row.digits || 9) : String(row.value)),
         el('td', { text: row.unit || '' }),
+        el('td', { class: 'num rel', 'data-value': exact(row.rel) }, row.rel === undefined || row.rel === null ? '' : fmt(row.rel, 3)),
         el('td', { class: 'src src-col', text: src || '—' })));
     }
     tbody.replaceChildren(...trs);
@@ -169,9 +171,9 @@ export function makeView(spec, api) {
 
   csvBtn.addEventListener('click', () => {
     if (!lastGood) return;
-    const rows = [['quantity', 'value', 'unit', 'source']];
-    for (const r of lastGood.rows) if (!r.section) rows.push([r.label, exact(r.value), r.unit || '', r.source || '']);
-    for (const f of lastGood.result.flags || []) rows.push([`flag ${f.key}`, f.level, f.value ?? '', f.message]);
+    const rows = [['quantity', 'value', 'unit', 'relative_error', 'source']];
+    for (const r of lastGood.rows) if (!r.section) rows.push([r.label, exact(r.value), r.unit || '', exact(r.rel), r.source || '']);
+    for (const f of lastGood.result.flags || []) rows.push([`flag ${f.key}`, f.level, f.value ?? '', '', f.message]);
     download(`chiwave-${spec.id}.csv`, csv(rows), 'text/csv');
   });
   jsonBtn.addEventListener('click', () => {

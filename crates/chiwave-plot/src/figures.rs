@@ -44,7 +44,7 @@ pub fn deflection_vs_b(d: &DeflectionSweep) -> Figure {
     if let Some(bc) = d.critical_b {
         if bc.is_finite() && bc > 0.0 {
             fig.bands.push(Band {
-                label: "captured (b ≤ b꜀)".into(),
+                label: "captured (b ≤ b_c)".into(),
                 x0: 0.0,
                 x1: bc,
                 color: palette::SAND,
@@ -204,6 +204,30 @@ pub fn amplification(w: &[f64], abs_f: &[Option<f64>], geometric: Option<&[Optio
     fig
 }
 
+/// Ray-optics magnification against the source offset u = β/θ_E (log y): total and the two
+/// images' |μ|, with the request's offset marked.
+pub fn magnification(u: &[f64], total: &[f64], plus: &[f64], minus: &[f64], current: Option<(f64, f64)>) -> Figure {
+    let mut fig = Figure::new(
+        "Point-lens magnification",
+        Axis::linear("source offset u = β/θ_E [Einstein radii]"),
+        Axis::log("magnification |μ|"),
+    );
+    let line = |v: &[f64]| -> Vec<Option<(f64, f64)>> { u.iter().zip(v).map(|(&x, &m)| Some((x, m.abs()))).collect() };
+    fig.series.push(Series { label: "|μ₊| minimum image".into(), points: line(plus), style: Style::dashed(palette::INDIGO, 2) });
+    fig.series.push(Series { label: "|μ₋| saddle image".into(), points: line(minus), style: Style::dotted(palette::AMBER, 2) });
+    fig.series.push(Series { label: "total |μ₊| + |μ₋|".into(), points: line(total), style: Style::line(palette::TEAL, 3) });
+    if let Some((x, m)) = current {
+        fig.markers.push(Markers { label: "this request".into(), points: vec![(x, m)], error_bars: Vec::new(), color: palette::INK, radius: 5 });
+    }
+    if let (Some(&a), Some(&b)) = (u.first(), u.last()) {
+        if b > a {
+            fig.x.range = Some((a, b));
+        }
+    }
+    fig.legend = LegendAt::TopRight;
+    fig
+}
+
 fn trim(v: f64) -> String {
     let s = format!("{v:.3}");
     s.trim_end_matches('0').trim_end_matches('.').to_string()
@@ -231,7 +255,7 @@ mod tests {
         });
         let (svg, fr) = render(&fig).unwrap();
         assert!(fr.x_log && fr.y_log);
-        for s in ["exact", "order 1", "captured (b ≤ b꜀)", "this request", "deflection angle α [arcsec]", "impact parameter b [M]"] {
+        for s in ["exact", "order 1", "captured (b ≤ b_c)", "this request", "deflection angle α [arcsec]", "impact parameter b [M]"] {
             assert!(svg.contains(s), "{s}");
         }
     }
@@ -249,6 +273,14 @@ mod tests {
         let ux = (fr.x_max - fr.x_min) / fr.width;
         let uy = (fr.y_max - fr.y_min) / fr.height;
         assert!((ux / uy - 1.0).abs() < 0.02);
+    }
+
+    #[test]
+    fn magnification_figure_labels() {
+        let u = [0.1, 0.5, 1.0];
+        let (svg, fr) = render(&magnification(&u, &[10.0, 2.2, 1.34], &[5.5, 1.6, 1.17], &[-4.5, -0.6, -0.17], Some((0.5, 2.2)))).unwrap();
+        assert!(fr.y_log && !fr.x_log);
+        assert!(svg.contains("magnification |μ|") && svg.contains("saddle image"));
     }
 
     #[test]
