@@ -321,13 +321,8 @@ fn axis_range(axis: &Axis, values: Vec<f64>) -> (f64, f64) {
             let w = if axis.log { 0.5 } else if lo == 0.0 { 1.0 } else { 0.1 * lo.abs() };
             (lo - w, lo + w)
         }
-        None => {
-            if axis.log {
-                (0.0, 1.0)
-            } else {
-                (0.0, 1.0)
-            }
-        }
+        // No data: one decade (log) or [0, 1] (linear).
+        None => (0.0, 1.0),
     }
 }
 

@@ -135,7 +135,7 @@ pub fn format_tick(v: f64, step: f64) -> String {
     if big >= 1e5 || step.abs() < 1e-4 {
         let e = v.abs().log10().floor() as i64;
         let m = v / 10f64.powi(e as i32);
-        let digits = ((step / 10f64.powi(e as i32)).log10().floor().min(0.0) * -1.0) as usize;
+        let digits = (-(step / 10f64.powi(e as i32)).log10().floor().min(0.0)) as usize;
         let ms = format!("{:.*}", digits.min(6), m);
         return format!("{ms}×10{}", superscript(e));
     }

@@ -31,11 +31,13 @@ pub(crate) fn input_error(e: &InputError) -> js_sys::Error {
 fn request_error(root: &str, e: serde_wasm_bindgen::Error) -> js_sys::Error {
     let msg = e.to_string();
     // serde's messages quote field names in backticks: "unknown field `foo`", "missing field `b`".
-    let field = if msg.starts_with("unknown field") || msg.starts_with("missing field") {
-        msg.split('`').nth(1).unwrap_or(root).to_string()
-    } else {
-        root.to_string()
-    };
+    let field = ["unknown field `", "missing field `"]
+        .iter()
+        .find_map(|p| msg.find(p).map(|i| &msg[i + p.len()..]))
+        .and_then(|rest| rest.split('`').next())
+        .filter(|f| !f.is_empty())
+        .unwrap_or(root)
+        .to_string();
     js_error("request", &field, &format!("{field}: {msg}"))
 }
 
