@@ -79,6 +79,23 @@ pub fn figure(request: JsValue, name: &str, options: JsValue) -> Result<JsValue,
     to_js(&rendered)
 }
 
+/// α(b) plot data for a light request's lens: `n` log-spaced b/M from `b_min` to `b_max`, the
+/// exact α and every partial sum (`chiwave_core::deflection::Sweep` as a JS object).
+///
+/// # Errors
+/// A JS `Error` naming the field (`b_min`, `b_max`, `n`, or the request's own fields).
+#[wasm_bindgen]
+pub fn light_sweep(request: JsValue, b_min: f64, b_max: f64, n: usize) -> Result<JsValue, js_sys::Error> {
+    let req: chiwave_core::deflection::LightRequest = {
+        match read_request(request)? {
+            Request::Light(r) => r,
+            _ => return Err(js_error("request", "kind", "kind: light_sweep needs a request of kind 'light'")),
+        }
+    };
+    let s = chiwave_core::deflection::sweep(&req, b_min, b_max, n).map_err(|e| input_error(&e))?;
+    to_js(&s)
+}
+
 /// The figure names [`figure`] knows for a request kind.
 #[wasm_bindgen]
 pub fn figure_names(kind: &str) -> Vec<String> {
