@@ -107,6 +107,7 @@ fn title_of(req: &Request) -> &'static str {
     match req {
         Request::Light(_) => "chiwave light — deflection of a massless wave",
         Request::Lens(_) => "chiwave lens — point-mass lens",
+        Request::Encounter(_) => "chiwave encounter — two-body scattering",
         #[allow(unreachable_patterns)]
         _ => "chiwave",
     }

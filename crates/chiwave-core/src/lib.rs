@@ -20,6 +20,7 @@ pub mod error;
 pub mod lensing;
 pub mod numeric;
 pub mod request;
+pub mod special;
 pub mod units;
 pub mod validity;
 pub mod waveform;

@@ -5,6 +5,7 @@
 //! message can carry any of them: `{"kind": "light", ...fields}`.
 
 use crate::deflection::{LightRequest, LightResult};
+use crate::encounter::{EncounterRequest, EncounterResult};
 use crate::error::InputError;
 use crate::lensing::{LensRequest, LensResult};
 use serde::{Deserialize, Serialize};
@@ -15,6 +16,7 @@ use serde::{Deserialize, Serialize};
 pub enum Request {
     Light(LightRequest),
     Lens(LensRequest),
+    Encounter(EncounterRequest),
 }
 
 /// The result of any request (serialised without a tag: the request's kind says what it is).
@@ -23,6 +25,7 @@ pub enum Request {
 pub enum Response {
     Light(Box<LightResult>),
     Lens(Box<LensResult>),
+    Encounter(Box<EncounterResult>),
 }
 
 /// Evaluates any request.
@@ -33,6 +36,7 @@ pub fn evaluate(req: &Request) -> Result<Response, InputError> {
     Ok(match req {
         Request::Light(r) => Response::Light(Box::new(r.evaluate()?)),
         Request::Lens(r) => Response::Lens(Box::new(r.evaluate()?)),
+        Request::Encounter(r) => Response::Encounter(Box::new(r.evaluate()?)),
     })
 }
 

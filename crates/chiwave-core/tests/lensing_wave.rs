@@ -7,7 +7,8 @@
 
 use chiwave_core::lensing::special::{kummer_m_imaginary, ln_gamma};
 use chiwave_core::lensing::wave::{
-    amplification, amplification_curve, amplification_factor, amplification_geometric, phi_m, Method,
+    amplification, amplification_curve, amplification_factor, amplification_geometric, exact_is_affordable, phi_m,
+    Method,
 };
 use chiwave_core::numeric::{gauss_legendre, integrate_gl, REL_TRANSCRIBED};
 use num_complex::Complex64;
@@ -268,4 +269,18 @@ fn curve_is_consistent_with_pointwise_values() {
     ] {
         assert_eq!(amplification_curve(y, a, b, n).unwrap_err().field(), field);
     }
+}
+
+#[test]
+fn exact_evaluation_covers_w_up_to_2000_at_every_offset() {
+    // Documented coverage: no geometric-optics stand-in for w ≤ 2000 at any y in [1e-3, 1e6]
+    // (continuation and large-|z| expansion overlap), and w = 1e4 is exact at y = 1.
+    for w in [1e-3, 1.0, 100.0, 1000.0, 2000.0] {
+        for k in 0..=300 {
+            let y = 10f64.powf(-3.0 + 9.0 * k as f64 / 300.0);
+            assert!(exact_is_affordable(w, y), "w={w} y={y}");
+        }
+    }
+    assert!(exact_is_affordable(1e4, 1.0));
+    assert!(!exact_is_affordable(3000.0, 11.0));
 }

@@ -62,7 +62,7 @@ fn turning_point(b: f64, a: f64) -> f64 {
             break;
         }
         let nx = x - f / fp;
-        if !(nx > 0.0) {
+        if nx.is_nan() || nx <= 0.0 {
             break;
         }
         x = nx;

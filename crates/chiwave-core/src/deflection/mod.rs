@@ -38,6 +38,21 @@ use crate::validity::{Flag, Level};
 use serde::{Deserialize, Serialize};
 use std::collections::BTreeMap;
 
+/// Smallest impact parameter accepted in a request, b/M (smaller values are captured anyway).
+pub const B_MIN: f64 = 1e-6;
+/// Largest impact parameter accepted in a request, b/M (keeps every partial sum finite).
+pub const B_MAX: f64 = 1e100;
+
+/// Checks B_MIN ≤ b ≤ B_MAX.
+pub(crate) fn check_b(field: &'static str, b: f64) -> Result<f64, InputError> {
+    finite(field, b)?;
+    if (B_MIN..=B_MAX).contains(&b) {
+        Ok(b)
+    } else {
+        Err(InputError::OutOfRange { field, value: b, allowed: format!("{B_MIN:e} ≤ {field}/M ≤ {B_MAX:e} (and > 0)") })
+    }
+}
+
 fn default_ppn_gamma() -> f64 {
     1.0
 }
@@ -313,7 +328,7 @@ impl LightRequest {
             let x = parse_length(field, q)?.in_units_of(field, mass_len)? / unit_mass;
             crate::error::positive(field, x)
         };
-        let b = length("b", &self.b)?;
+        let b = check_b("b", length("b", &self.b)?)?;
         let wavelength = self.wavelength.as_ref().map(|q| length("wavelength", q)).transpose()?;
         let beam = self.beam_width.as_ref().map(|q| length("beam_width", q)).transpose()?;
         let elongation = match self.elongation_deg {

@@ -150,7 +150,7 @@ fn trace(o: Orbit, r_max: f64, r_plus: f64, captured: bool, kerr: bool, rule: &(
 /// and `charge`; `req.b` is not used).
 ///
 /// # Domain
-/// Each b/M > 0; 1 to 256 rays; `r_max` (units of M) ≥ 1.5 × the largest b and ≤ 10⁶;
+/// Each b/M in [1e-6, 1e100]; 1 to 256 rays; `r_max` (units of M) ≥ 1.5 × the largest b and ≤ 10⁶;
 /// 2 ≤ `n_points` ≤ 100000 points per ray (the path is thinned evenly to that many).
 ///
 /// # Errors
@@ -177,6 +177,7 @@ pub fn rays(req: &LightRequest, b_values: &[f64], r_max: f64, n_points: usize) -
     }
     for &b in b_values {
         positive("b_values", b)?;
+        super::check_b("b_values", b)?;
     }
     positive("r_max", r_max)?;
     let bmax = b_values.iter().cloned().fold(0.0, f64::max);

@@ -32,27 +32,28 @@ pub fn horizon_radius(q: f64) -> f64 {
     1.0 + (1.0 - q * q).max(0.0).sqrt()
 }
 
-/// Largest root r0 of r⁴ − b²(r² − 2Mr + Q²) = 0 (the turning point, (du/dφ)² = 0), by
-/// Newton's method from r = b, which converges monotonically because the quartic is increasing
-/// and convex for r ≥ r0 (r0 ≥ r_ph > b/√6 for b > b_c).
+/// Largest root r0 of r⁴ − b²(r² − 2Mr + Q²) = 0 (the turning point, (du/dφ)² = 0), solved for
+/// x = r0/b as x⁴ − x² + 2εx − (Qε)² = 0 (scale-free, no overflow for large b) by Newton's
+/// method from x = 1, which converges monotonically because the quartic is increasing and
+/// convex for x ≥ x0 (r0 ≥ r_ph > b/√6 for b > b_c).
 fn turning_point(b: f64, q: f64) -> Result<f64, InputError> {
-    let b2 = b * b;
-    let q2 = q * q;
-    let mut r = b;
+    let eps = 1.0 / b;
+    let qe2 = (q * eps) * (q * eps);
+    let mut x: f64 = 1.0;
     for _ in 0..300 {
-        let f = r * r * r * r - b2 * (r * r - 2.0 * r + q2);
-        let fp = 4.0 * r * r * r - b2 * (2.0 * r - 2.0);
+        let f = x * x * x * x - x * x + 2.0 * eps * x - qe2;
+        let fp = 4.0 * x * x * x - 2.0 * x + 2.0 * eps;
         if fp <= 0.0 {
             break;
         }
-        let nr = r - f / fp;
-        if nr >= r {
-            return Ok(r);
+        let nx = x - f / fp;
+        if nx >= x {
+            return Ok(x * b);
         }
-        r = nr;
+        x = nx;
     }
-    if r.is_finite() && r > 0.0 {
-        Ok(r)
+    if x.is_finite() && x > 0.0 {
+        Ok(x * b)
     } else {
         Err(InputError::NoConvergence { what: "Reissner–Nordström turning point".into() })
     }

@@ -83,7 +83,7 @@ fn photon_offset(b: f64) -> Option<f64> {
         let next = d - f / fp;
         // After the first step the iterate lies above the root and decreases monotonically;
         // stop when rounding ends the decrease.
-        if !(next > 0.0) || (it > 0 && next >= d) {
+        if next.is_nan() || next <= 0.0 || (it > 0 && next >= d) {
             break;
         }
         let done = (d - next).abs() <= 4e-16 * d;

@@ -38,7 +38,8 @@ pub const MAX_SWEEP_POINTS: usize = 100_000;
 /// and the optional fields are not used).
 ///
 /// # Errors
-/// The request's own validation errors; `b_min`, `b_max` not finite or ≤ 0; `b_max ≤ b_min`
+/// The request's own validation errors; `b_min`, `b_max` not finite or outside
+/// [`super::B_MIN`] … [`super::B_MAX`]; `b_max ≤ b_min`
 /// (field `b_max`); `n` outside 2..=100000 (field `n`); non-convergence.
 ///
 /// # Examples
@@ -60,6 +61,8 @@ pub fn sweep(req: &LightRequest, b_min: f64, b_max: f64, n: usize) -> Result<Swe
     let v = probe.validate()?;
     positive("b_min", b_min)?;
     positive("b_max", b_max)?;
+    super::check_b("b_min", b_min)?;
+    super::check_b("b_max", b_max)?;
     if b_max <= b_min {
         return Err(InputError::OutOfRange { field: "b_max", value: b_max, allowed: format!("b_max > b_min = {b_min}") });
     }

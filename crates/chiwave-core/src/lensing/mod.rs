@@ -17,6 +17,8 @@
 pub mod special;
 pub mod wave;
 
+pub use wave::{amplification_curve, AmplificationCurve};
+
 use crate::error::InputError;
 use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
@@ -181,7 +183,7 @@ pub fn einstein_angle(gm: f64, d_l: f64, d_s: f64) -> Result<f64, InputError> {
     let d_ls = d_s - d_l;
     // Written as a product of ratios so that nothing overflows before the square root.
     let theta = (4.0 * (gm / (C * C)) / d_l * (d_ls / d_s)).sqrt();
-    if !(theta.is_finite() && theta > 0.0 && theta >= f64::MIN_POSITIVE) {
+    if !(theta.is_finite() && theta >= f64::MIN_POSITIVE) {
         return Err(InputError::OutOfRange {
             field: "mass",
             value: gm,
@@ -286,7 +288,7 @@ pub struct LensResult {
     pub sources: BTreeMap<&'static str, &'static str>,
 }
 
-const SRC_EINSTEIN: &str = "Einstein 1936, Science 84, 506; Schneider, Ehlers & Falco 1992, Gravitational Lenses; deflection sheet §4";
+const SRC_EINSTEIN: &str = "Einstein 1936; Refsdal 1964; Schneider, Ehlers & Falco 1992, Gravitational Lenses; deflection sheet §4";
 const SRC_IMAGES: &str = "Paczyński 1986, ApJ 304, 1; Schneider, Ehlers & Falco 1992; deflection sheet §4";
 const SRC_DELAY: &str = "Takahashi & Nakamura 2003, ApJ 595, 1039, arXiv:astro-ph/0305055 (T(y) in units of 4GM_Lz/c³); deflection sheet §4";
 const SRC_WAVE: &str = "Takahashi & Nakamura 2003, ApJ 595, 1039, arXiv:astro-ph/0305055 (point-lens F(w, y), e^{-iωt} convention); deflection sheet §4";
@@ -429,7 +431,7 @@ impl LensRequest {
             for k in ["w", "amplification", "amplification_abs", "amplification_phase_rad", "amplification_geometric"] {
                 result.sources.insert(k, SRC_WAVE);
             }
-            flags.extend(wave_flags(w, a.method));
+            flags.extend(wave_flags(w, delta_t, a.method));
         }
         result.flags = flags;
         Ok(result)
@@ -492,8 +494,21 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
 }
 
 /// Flags for the wave-optics part: geometric-optics validity and the F method.
-fn wave_flags(w: f64, method: wave::Method) -> Vec<Flag> {
+fn wave_flags(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
     let mut flags = Vec::new();
+    // The interference phase wΔT (value, radians) is carried in f64: its absolute error is
+    // ~1e-16·wΔT rad, 1e-6 rad at 1e10 and 1e-2 rad at 1e14.
+    flags.push(Flag::small_parameter(
+        "interference_phase",
+        w * delta_t,
+        1e10,
+        1e14,
+        [
+            "The interference phase wΔT is resolved (double precision).",
+            "The interference phase wΔT (this value, in radians) is large: its rounding error reaches 1e-6 to 1e-2 rad; fine oscillations in F are only indicative.",
+            "The interference phase wΔT exceeds what double precision resolves: the oscillating part of F (the phase of the faint image) is not meaningful, only its envelope.",
+        ],
+    ));
     let (level, msg) = if w >= 50.0 {
         (Level::Ok, "w ≫ 1: geometric optics holds to ~1/w; the ray magnifications describe the signal.")
     } else if w >= 1.0 {

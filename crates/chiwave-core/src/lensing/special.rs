@@ -21,9 +21,12 @@
 //!   (derived here by inserting f = Σ c_n (z − z₀)ⁿ). On the imaginary axis both solutions of
 //!   Kummer's equation have the same size (its Whittaker form has a purely oscillatory,
 //!   turning-point-free coefficient there), so rounding errors are not amplified along the way.
-//!   Step |h| ≤ min(0.35 |z₀|, 3/(1 + (|a| + b)/|z₀|)): the first bound keeps the singular
-//!   point z = 0 outside the disc (errors in the coefficients decay like 0.35ⁿ), the second
-//!   keeps the local oscillation at ≲ 3 radians per step (terms ~ 3ⁿ/n!).
+//!   Step |h| ≤ min(0.35 |z₀|, 3/(½ + √(¼ + (|a| + b)/|z₀|))): the first bound keeps the
+//!   singular point z = 0 outside the disc (errors in the coefficients decay like 0.35ⁿ), the
+//!   second keeps the local oscillation at ≲ 3 radians per step (terms ~ 3ⁿ/n!).
+//! - Large |z| with α²/|z| of order 1 or less: the two sums of the large-|z| expansion
+//!   (DLMF 13.7.2), accepted only when they converge to 1e-17 with no term above 1e3
+//!   ([`kummer_asymptotic_sums`]); the caller combines them with the Γ prefactors.
 
 use crate::error::InputError;
 use num_complex::Complex64;
@@ -63,6 +66,11 @@ impl CompensatedSum {
     fn value(&self) -> Complex64 {
         self.sum + self.carry
     }
+}
+
+/// |re| + |im|.
+fn l1(z: Complex64) -> f64 {
+    z.re.abs() + z.im.abs()
 }
 
 /// Neumaier's error-free addition step: s = fl(a + b) and the rounding error of it.
@@ -184,8 +192,9 @@ fn taylor_step(
             / ((nf + 1.0) * (nf + 2.0));
         sf.add(d2);
         sdf.add(d2 * (nf + 2.0));
-        let size = sf.value().norm() + sdf.value().norm();
-        if n >= 3 && (d1.norm() + d2.norm()) * (nf + 3.0) <= 1e-18 * size {
+        // L1 norms (no square roots): within √2 of the Euclidean ones.
+        let size = l1(sf.sum) + l1(sdf.sum);
+        if n >= 3 && (l1(d1) + l1(d2)) * (nf + 3.0) <= 1e-18 * size {
             return Ok((sf.value(), sdf.value() / h));
         }
         d0 = d1;
@@ -194,6 +203,14 @@ fn taylor_step(
     Err(InputError::NoConvergence {
         what: format!("Taylor continuation of 1F1 at |z| = {}", z0.norm()),
     })
+}
+
+/// Largest local rate |d ln f/dz| of the solutions of Kummer's equation at |z| = x on the
+/// imaginary axis, for |a| + b = `amag`: ½ + √(¼ + amag/x). At x ≫ amag this is the rate
+/// 1 + amag/x of e^z z^{a−b}; at x ≪ amag the Bessel-like rate √(amag/x) of
+/// M ≈ J₀(2√(αx)) (from the Whittaker form W'' = −(¼ + α/x + …)W on the ray; derived here).
+fn local_rate(amag: f64, x: f64) -> f64 {
+    0.5 + (0.25 + amag / x).sqrt()
 }
 
 /// The radius where the direct series stops and continuation starts, for |a| = `amag`.
@@ -206,15 +223,18 @@ pub(crate) fn series_radius(amag: f64) -> f64 {
 }
 
 /// A-priori count of continuation steps from the series radius out to |z| = `t` for |a| = `amag`
-/// (b = 1): geometric growth while the 0.35|z| bound holds, then ≈ (t + (|a| + 1) ln(t/t_s))/3.
+/// (b = 1): ln(t/t_s)/ln 1.35 for the steps bounded by 0.35|z|, plus ≤ (t + 2√((|a| + 1)t))/3
+/// for those bounded by the local oscillation (an upper estimate).
 pub fn continuation_steps_estimate(amag: f64, t: f64) -> f64 {
     let ts = series_radius(amag);
     if t.is_nan() || t <= ts {
         return 0.0;
     }
+    // ∫ local_rate dx / STEP_PHASE ≤ (t + 2√((|a| + 1) t)) / STEP_PHASE, plus the steps bounded
+    // by 0.35|z|.
     let geometric = (t / ts).ln() / (1.0 + STEP_FRACTION).ln();
-    let oscillation = (t + (amag + 1.0) * (t / ts).ln()) / STEP_PHASE;
-    geometric.min(oscillation + 10.0) + oscillation
+    let oscillation = (t + 2.0 * ((amag + 1.0) * t).sqrt()) / STEP_PHASE;
+    geometric + oscillation
 }
 
 /// Kummer's function M(a, 1, z) = ₁F₁(a; 1; z) for the lensing arguments a = iα, z = it.
@@ -265,7 +285,7 @@ pub fn kummer_m_imaginary(alpha: f64, t: f64) -> Result<(Complex64, KummerMethod
                 what: format!("1F1 continuation needs more than {MAX_STEPS} steps (|z| = {t}, |a| = {alpha})"),
             });
         }
-        let mut dx = (STEP_FRACTION * x).min(STEP_PHASE / (1.0 + amag / x));
+        let mut dx = (STEP_FRACTION * x).min(STEP_PHASE / local_rate(amag, x));
         if x + dx > t || t - (x + dx) < 1e-3 * dx {
             dx = t - x;
         }

@@ -25,7 +25,7 @@ use std::f64::consts::PI;
 pub const W_MAX: f64 = 1e8;
 /// Largest y = β/θ_E accepted by the wave-optics functions.
 pub const Y_MAX: f64 = 1e6;
-/// Budget of Taylor-continuation steps for the exact F (about 20 ms natively); above it
+/// Budget of Taylor-continuation steps for the exact F (a few ms natively); above it
 /// [`amplification`] switches to geometric optics and [`amplification_factor`] refuses.
 pub const EXACT_STEP_BUDGET: f64 = 60_000.0;
 
@@ -56,6 +56,12 @@ pub fn dimensionless_frequency(gm_redshifted: f64, frequency_hz: f64) -> f64 {
 /// # Formula
 /// Takahashi & Nakamura 2003, astro-ph/0305055; deflection sheet §4. x_m − y is computed as
 /// 2/(y + √(y² + 4)) to avoid cancellation at large y.
+///
+/// # Examples
+/// ```
+/// // y = 0: x_m = 1, φ_m = 1/2 (elementary).
+/// assert_eq!(chiwave_core::lensing::wave::phi_m(0.0), 0.5);
+/// ```
 pub fn phi_m(y: f64) -> f64 {
     let s = y.hypot(2.0);
     let xm = 0.5 * (y + s);
@@ -157,9 +163,15 @@ fn amplification_asymptotic(w: f64, y: f64) -> Result<Option<Complex64>, InputEr
 /// and Γ are combined as one exponent through ln Γ, so nothing overflows at large w.
 ///
 /// # Domain
-/// 0 ≤ w ≤ 1e8 and 0 ≤ y ≤ 1e6, finite, and within the step budget
-/// ([`exact_is_affordable`]; roughly w(y² + ln(w y²)) ≲ 3e5, which covers w ≤ 1e3 for y ≤ 10).
-/// F(0, y) = 1. y = 0 is allowed: there |F|² = πw/(1 − e^{−πw}).
+/// 0 ≤ w ≤ 1e8 and 0 ≤ y ≤ 1e6, finite, and [`exact_is_affordable`]: the large-|z| expansion
+/// converges (roughly w ≲ 18y²) or the continuation needs ≤ 60 000 steps (≈ wy(y + 2)/6).
+/// Together these cover every y in [0, 1e6] for w ≤ 2000 (scanned in the tests); at larger w
+/// gaps open near y ~ 10 (w = 3000: 10 < y < 12.5), and at y ≤ 1 F is exact up to w ≈ 1e5.
+/// F(0, y) = 1. y = 0 is allowed
+/// (no continuation is needed there, at any w): |F|² = πw/(1 − e^{−πw}).
+///
+/// Accuracy: ≈ 1e-15 relative for w ≲ 10, degrading like ~1e-16·w because phases of size
+/// w ln w are carried in f64 (7e-13 observed at w = 1000 against mpmath).
 ///
 /// # Errors
 /// [`InputError::NotFinite`] / [`InputError::OutOfRange`] naming `w` or `y`; `OutOfRange` on `w`

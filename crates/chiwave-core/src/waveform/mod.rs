@@ -1,1 +1,2 @@
 //! Leading-order gravitational and electromagnetic waveforms, memory and spectra.
+pub mod em;
