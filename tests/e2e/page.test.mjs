@@ -87,7 +87,7 @@ test('light view: bad input shows a message next to the field and keeps the last
   await type('#f-light-b', '10');
   const good = await exactAlpha();
   await type('#f-light-b', 'NaN');
-  const msg = page.locator('[data-error-for="b"]');
+  const msg = page.locator('#view-light [data-error-for="b"]');
   await msg.waitFor({ state: 'visible' });
   assert.match(await msg.textContent(), /^b:/, 'message names the field');
   assert.equal(await page.getAttribute('#f-light-b', 'aria-invalid'), 'true');
@@ -95,7 +95,7 @@ test('light view: bad input shows a message next to the field and keeps the last
   await type('#f-light-b', '10 furlongs');
   assert.match(await msg.textContent(), /b:.*unit/i);
   await type('#f-light-spin', 'fast');
-  assert.match(await page.locator('[data-error-for="spin"]').textContent(), /spin/);
+  assert.match(await page.locator('#view-light [data-error-for="spin"]').textContent(), /spin/);
   await type('#f-light-spin', '0');
   await type('#f-light-b', '10');
   assert.equal(await msg.textContent(), '');
@@ -107,7 +107,7 @@ test('light view: a captured ray is a result, shown as captured', async () => {
   const cap = page.locator('#view-light [data-role="captured"]');
   await cap.waitFor();
   assert.equal((await cap.textContent()).trim(), 'captured');
-  assert.equal(await page.locator('[data-error-for="b"]').textContent(), '');
+  assert.equal(await page.locator('#view-light [data-error-for="b"]').textContent(), '');
   await page.screenshot({ path: path.join(artifacts, 'light-captured.png'), fullPage: true });
   await type('#f-light-b', '10');
   await exactAlpha();

@@ -134,10 +134,22 @@ fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, js_sys::Error> {
     }
 }
 
+fn kind_of(req: &Request) -> &'static str {
+    match req {
+        Request::Light(_) => "light",
+        Request::Lens(_) => "lens",
+        #[allow(unreachable_patterns)]
+        _ => "this kind",
+    }
+}
+
 pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Rendered, js_sys::Error> {
     let fig = match req {
         Request::Light(r) => light_figure(r, name, opts),
         Request::Lens(r) => lens_figure(r, name),
+        // Kinds without figures yet: say which kind, so the page can show it next to the plot.
+        #[allow(unreachable_patterns)]
+        other => Err(unknown(kind_of(other), name)),
     }?;
     finish(fig, opts)
 }
