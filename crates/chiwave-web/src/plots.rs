@@ -1,0 +1,155 @@
+//! Figure dispatch: request + figure name → the core's plot data → one chiwave-plot builder.
+//! No physics here: every number comes from a core function.
+
+use crate::input_error;
+use chiwave_core::deflection::{self, LightRequest};
+use chiwave_core::lensing::{self, LensRequest};
+use chiwave_core::request::Request;
+use chiwave_core::units::AngleUnit;
+use chiwave_plot::{figures, Figure, Rendered};
+use serde::Deserialize;
+
+/// Drawing options sent by the page.
+#[derive(Debug, Clone, Default, Deserialize)]
+#[serde(default, deny_unknown_fields)]
+pub struct Options {
+    pub angle_unit: Option<String>,
+    pub width: Option<u32>,
+    pub height: Option<u32>,
+}
+
+impl Options {
+    fn angle(&self) -> Result<AngleUnit, js_sys::Error> {
+        match &self.angle_unit {
+            None => Ok(AngleUnit::Rad),
+            Some(s) => AngleUnit::parse("angle_unit", s).map_err(|e| input_error(&e)),
+        }
+    }
+}
+
+/// Figure names per request kind.
+pub fn names(kind: &str) -> &'static [&'static str] {
+    match kind {
+        "light" => &["alpha_b", "rays"],
+        "lens" => &["amplification", "magnification"],
+        _ => &[],
+    }
+}
+
+fn unknown(kind: &str, name: &str) -> js_sys::Error {
+    let allowed = names(kind).join(", ");
+    crate::js_error("request", "figure", &format!("figure: no figure '{name}' for kind '{kind}'; available: {allowed}"))
+}
+
+fn finish(mut fig: Figure, opts: &Options) -> Result<Rendered, js_sys::Error> {
+    if let Some(w) = opts.width {
+        fig.width = w.clamp(320, 2400);
+    }
+    if let Some(h) = opts.height {
+        fig.height = h.clamp(240, 1800);
+    }
+    chiwave_plot::render_for_page(&fig).map_err(|e| crate::js_error("plot", "figure", &e.to_string()))
+}
+
+/// Samples of the |F|(w) figure: enough for the oscillations on a 760 px wide plot.
+const AMPLIFICATION_SAMPLES: usize = 240;
+/// Samples of the μ(u) figure.
+const MAGNIFICATION_SAMPLES: usize = 300;
+
+/// Points of the α(b) sweep (log-spaced).
+const SWEEP_SAMPLES: usize = 400;
+/// Points per ray path.
+const RAY_POINTS: usize = 400;
+
+fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, js_sys::Error> {
+    let res = r.evaluate().map_err(|e| input_error(&e))?;
+    let b = res.impact_parameter;
+    let bc = res.critical_b;
+    match name {
+        "alpha_b" => {
+            // From inside the capture region to well into the weak field, always containing b.
+            let b_min = (0.5 * bc).min(0.5 * b).max(1e-3);
+            let b_max = (1e4f64).max(30.0 * b).min(1e12);
+            let s = deflection::sweep(r, b_min, b_max, SWEEP_SAMPLES).map_err(|e| input_error(&e))?;
+            let partials: Vec<figures::Partial> = s
+                .series
+                .iter()
+                .map(|p| figures::Partial { label: format!("series to order {}", p.order), values: p.alpha.iter().map(|&a| Some(a)).collect() })
+                .collect();
+            Ok(figures::deflection_vs_b(&figures::DeflectionSweep {
+                b: &s.b,
+                exact: &s.alpha,
+                partials: &partials,
+                strong: s.strong_deflection.as_deref(),
+                critical_b: Some(s.critical_b),
+                current: res.alpha.map(|a| (b, a)),
+                b_unit: "M",
+                angle: opts.angle()?,
+            }))
+        }
+        "rays" => {
+            // A fan around the critical impact parameter plus the request's own ray.
+            let mut bs: Vec<f64> = [0.55, 0.85, 1.02, 1.15, 1.45, 2.0, 3.0].iter().map(|k| k * bc).collect();
+            let extent = (4.0 * bc).max(1.25 * b).min(1e5);
+            if b < 1.5 * extent {
+                bs.push(b);
+            }
+            bs.sort_by(f64::total_cmp);
+            bs.dedup_by(|a, b| (*a - *b).abs() < 1e-9 * b.abs());
+            let largest = bs.last().copied().unwrap_or(b);
+            let r_max = (1.5 * largest).max(1.6 * extent).min(1e6);
+            let fan = deflection::rays(r, &bs, r_max, RAY_POINTS).map_err(|e| input_error(&e))?;
+            let paths: Vec<figures::RayPath> =
+                fan.rays.iter().map(|ray| figures::RayPath { x: ray.x.clone(), y: ray.y.clone(), captured: ray.captured }).collect();
+            let horizon = (fan.horizon_radius > 0.0).then_some(fan.horizon_radius);
+            Ok(figures::rays(&paths, horizon, Some(fan.photon_orbit_radius), extent))
+        }
+        _ => Err(unknown("light", name)),
+    }
+}
+
+fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, js_sys::Error> {
+    let res = r.evaluate().map_err(|e| input_error(&e))?;
+    match name {
+        "amplification" => {
+            // The w range spans the diffraction (w ≲ 1) and geometric (w ≫ 1) regimes and
+            // includes the request's own w when one is given.
+            let (w_min, w_max) = match res.w {
+                Some(w) if w.is_finite() && w > 0.0 => ((w / 30.0).min(0.01), (w * 30.0).clamp(100.0, 1e4)),
+                _ => (0.01, 100.0),
+            };
+            let c = lensing::wave::amplification_curve(r.offset, w_min, w_max, AMPLIFICATION_SAMPLES)
+                .map_err(|e| input_error(&e))?;
+            let abs: Vec<Option<f64>> = c.abs.iter().map(|&v| Some(v)).collect();
+            let geo: Option<Vec<Option<f64>>> = c.abs_geometric.as_ref().map(|g| g.iter().map(|&v| Some(v)).collect());
+            Ok(figures::amplification(&c.w, &abs, geo.as_deref(), res.w))
+        }
+        "magnification" => {
+            let u_max = (3.0 * r.offset).clamp(2.0, 1e6);
+            let u_min = (u_max / MAGNIFICATION_SAMPLES as f64).min(0.5 * r.offset).max(1e-10);
+            let c = lensing::magnification_curve(u_min, u_max, MAGNIFICATION_SAMPLES).map_err(|e| input_error(&e))?;
+            Ok(figures::magnification(&c.offset, &c.total, &c.plus, &c.minus, Some((res.offset, res.total_magnification))))
+        }
+        _ => Err(unknown("lens", name)),
+    }
+}
+
+fn kind_of(req: &Request) -> &'static str {
+    match req {
+        Request::Light(_) => "light",
+        Request::Lens(_) => "lens",
+        #[allow(unreachable_patterns)]
+        _ => "this kind",
+    }
+}
+
+pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Rendered, js_sys::Error> {
+    let fig = match req {
+        Request::Light(r) => light_figure(r, name, opts),
+        Request::Lens(r) => lens_figure(r, name),
+        // Kinds without figures yet: say which kind, so the page can show it next to the plot.
+        #[allow(unreachable_patterns)]
+        other => Err(unknown(kind_of(other), name)),
+    }?;
+    finish(fig, opts)
+}
