@@ -24,6 +24,10 @@ pub struct Parsed {
     pub spelled: Vec<(String, String)>,
     pub format: Format,
     pub svg: Option<String>,
+    /// Which figure `--svg` draws (default: the first figure of the command).
+    pub figure: Option<String>,
+    /// Angle unit of the figure's axis (`--plot-angle-unit`).
+    pub plot_angle_unit: Option<String>,
     /// Positional arguments after the command (e.g. a scenario file).
     pub positional: Vec<String>,
 }
@@ -64,6 +68,8 @@ pub fn parse(args: &[String]) -> Result<Parsed, String> {
         spelled: Vec::new(),
         format: Format::Table,
         svg: None,
+        figure: None,
+        plot_angle_unit: None,
         positional: Vec::new(),
     };
     while let Some(a) = it.next() {
@@ -78,6 +84,14 @@ pub fn parse(args: &[String]) -> Result<Parsed, String> {
             "--svg" => match it.next() {
                 Some(f) => p.svg = Some(f.clone()),
                 None => return Err("--svg: missing file name".into()),
+            },
+            "--figure" => match it.next() {
+                Some(f) => p.figure = Some(f.clone()),
+                None => return Err("--figure: missing figure name".into()),
+            },
+            "--plot-angle-unit" => match it.next() {
+                Some(f) => p.plot_angle_unit = Some(f.clone()),
+                None => return Err("--plot-angle-unit: missing unit (rad, deg, arcsec, mas, uas)".into()),
             },
             opt if opt.starts_with("--") => {
                 let (name, inline) = match opt.split_once('=') {

@@ -10,6 +10,7 @@ mod table;
 use args::{Format, Parsed};
 use chiwave_core::request::{evaluate, Request, Scenario};
 use chiwave_core::validity::ESTIMATE_NOTICE;
+use chiwave_plot::scene;
 use serde_json::{Map, Value};
 use std::process::ExitCode;
 
@@ -17,7 +18,7 @@ include!(concat!(env!("OUT_DIR"), "/scenarios.rs"));
 
 const HELP: &str = "chiwave — gravitational and electromagnetic scattering, on the command line
 
-usage: chiwave COMMAND [--option VALUE]... [--json | --csv] [--svg FILE]
+usage: chiwave COMMAND [--option VALUE]... [--json | --csv] [--svg FILE [--figure NAME]]
 
 commands
   light       deflection of light by a mass (exact, PM series, strong field, spin, charge, PPN)
@@ -108,12 +109,40 @@ fn title_of(req: &Request) -> &'static str {
         Request::Light(_) => "chiwave light — deflection of a massless wave",
         Request::Lens(_) => "chiwave lens — point-mass lens",
         Request::Encounter(_) => "chiwave encounter — two-body scattering",
+        Request::Waveform(_) => "chiwave waveform — leading-order radiation at a detector",
         #[allow(unreachable_patterns)]
         _ => "chiwave",
     }
 }
 
+/// Writes the figure of `req` chosen by `--figure` (default: the kind's first) to `path` as SVG.
+fn write_svg(p: &Parsed, req: &Request, path: &str) -> Result<(), Failure> {
+    let kind = match req {
+        Request::Light(_) => "light",
+        Request::Lens(_) => "lens",
+        Request::Encounter(_) => "encounter",
+        #[allow(unreachable_patterns)]
+        _ => "waveform",
+    };
+    let name = match &p.figure {
+        Some(n) => n.clone(),
+        None => scene::names(kind)
+            .first()
+            .map(|s| s.to_string())
+            .ok_or_else(|| input_failure(format!("--svg: no figure for `{kind}` yet")))?,
+    };
+    let opts = scene::Options { angle_unit: p.plot_angle_unit.clone(), ..Default::default() };
+    let fig = scene::figure(req, &name, &opts).map_err(|e| input_failure(with_option(p, e.field(), &e.to_string())))?;
+    let (svg, _) = chiwave_plot::render(&fig).map_err(|e| Failure { message: format!("--svg: {e}"), status: 1 })?;
+    std::fs::write(path, svg).map_err(|e| Failure { message: format!("--svg: cannot write {path}: {e}"), status: 1 })?;
+    eprintln!("chiwave: wrote figure '{name}' to {path}");
+    Ok(())
+}
+
 fn run_request(p: &Parsed, req: &Request) -> Result<String, Failure> {
+    if let Some(path) = &p.svg {
+        write_svg(p, req, path)?;
+    }
     let resp = evaluate(req).map_err(|e| input_failure(with_option(p, e.field(), &e.to_string())))?;
     let v = serde_json::to_value(&resp).map_err(|e| Failure { message: format!("internal: {e}"), status: 1 })?;
     Ok(match p.format {

@@ -10,9 +10,9 @@
 use chiwave_core::request::{Request, Scenario};
 use chiwave_core::InputError;
 use serde::Serialize;
+use chiwave_plot::scene;
 use wasm_bindgen::prelude::*;
 
-mod plots;
 
 /// A JS `Error` with `field` and `kind` properties.
 fn js_error(kind: &str, field: &str, message: &str) -> js_sys::Error {
@@ -70,12 +70,13 @@ pub fn evaluate(request: JsValue) -> Result<JsValue, js_sys::Error> {
 #[wasm_bindgen]
 pub fn figure(request: JsValue, name: &str, options: JsValue) -> Result<JsValue, js_sys::Error> {
     let req = read_request(request)?;
-    let opts: plots::Options = if options.is_undefined() || options.is_null() {
-        plots::Options::default()
+    let opts: scene::Options = if options.is_undefined() || options.is_null() {
+        scene::Options::default()
     } else {
         serde_wasm_bindgen::from_value(options).map_err(|e| request_error("options", e))?
     };
-    let rendered = plots::figure(&req, name, &opts)?;
+    let fig = scene::figure(&req, name, &opts).map_err(|e| input_error(&e))?;
+    let rendered = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
     to_js(&rendered)
 }
 
@@ -99,7 +100,7 @@ pub fn light_sweep(request: JsValue, b_min: f64, b_max: f64, n: usize) -> Result
 /// The figure names [`figure`] knows for a request kind.
 #[wasm_bindgen]
 pub fn figure_names(kind: &str) -> Vec<String> {
-    plots::names(kind).iter().map(|s| s.to_string()).collect()
+    scene::names(kind).iter().map(|s| s.to_string()).collect()
 }
 
 /// Draws a generic figure description (`chiwave_plot::Figure` as JSON) — for views that

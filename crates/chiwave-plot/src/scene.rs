@@ -1,15 +1,15 @@
-//! Figure dispatch: request + figure name → the core's plot data → one chiwave-plot builder.
-//! No physics here: every number comes from a core function.
+//! Figure dispatch, shared by the page and the CLI: request + figure name → the core's plot data
+//! → one builder of [`crate::figures`]. No physics here: every number comes from a core function.
 
-use crate::input_error;
+use crate::{figures, Figure};
 use chiwave_core::deflection::{self, LightRequest};
+use chiwave_core::error::InputError;
 use chiwave_core::lensing::{self, LensRequest};
 use chiwave_core::request::Request;
 use chiwave_core::units::AngleUnit;
-use chiwave_plot::{figures, Figure, Rendered};
 use serde::Deserialize;
 
-/// Drawing options sent by the page.
+/// Drawing options (sent by the page as JSON; set by the CLI from its options).
 #[derive(Debug, Clone, Default, Deserialize)]
 #[serde(default, deny_unknown_fields)]
 pub struct Options {
@@ -19,10 +19,10 @@ pub struct Options {
 }
 
 impl Options {
-    fn angle(&self) -> Result<AngleUnit, js_sys::Error> {
+    fn angle(&self) -> Result<AngleUnit, InputError> {
         match &self.angle_unit {
             None => Ok(AngleUnit::Rad),
-            Some(s) => AngleUnit::parse("angle_unit", s).map_err(|e| input_error(&e)),
+            Some(s) => AngleUnit::parse("angle_unit", s),
         }
     }
 }
@@ -36,19 +36,20 @@ pub fn names(kind: &str) -> &'static [&'static str] {
     }
 }
 
-fn unknown(kind: &str, name: &str) -> js_sys::Error {
+fn unknown(kind: &str, name: &str) -> InputError {
     let allowed = names(kind).join(", ");
-    crate::js_error("request", "figure", &format!("figure: no figure '{name}' for kind '{kind}'; available: {allowed}"))
+    let allowed = if allowed.is_empty() { "none yet".to_string() } else { allowed };
+    InputError::Inconsistent { field: "figure", reason: format!("no figure '{name}' for kind '{kind}'; available: {allowed}") }
 }
 
-fn finish(mut fig: Figure, opts: &Options) -> Result<Rendered, js_sys::Error> {
+fn sized(mut fig: Figure, opts: &Options) -> Figure {
     if let Some(w) = opts.width {
         fig.width = w.clamp(320, 2400);
     }
     if let Some(h) = opts.height {
         fig.height = h.clamp(240, 1800);
     }
-    chiwave_plot::render_for_page(&fig).map_err(|e| crate::js_error("plot", "figure", &e.to_string()))
+    fig
 }
 
 /// Samples of the |F|(w) figure: enough for the oscillations on a 760 px wide plot.
@@ -61,8 +62,8 @@ const SWEEP_SAMPLES: usize = 400;
 /// Points per ray path.
 const RAY_POINTS: usize = 400;
 
-fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, js_sys::Error> {
-    let res = r.evaluate().map_err(|e| input_error(&e))?;
+fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, InputError> {
+    let res = r.evaluate()?;
     let b = res.impact_parameter;
     let bc = res.critical_b;
     match name {
@@ -70,7 +71,7 @@ fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, 
             // From inside the capture region to well into the weak field, always containing b.
             let b_min = (0.5 * bc).min(0.5 * b).max(1e-3);
             let b_max = (1e4f64).max(30.0 * b).min(1e12);
-            let s = deflection::sweep(r, b_min, b_max, SWEEP_SAMPLES).map_err(|e| input_error(&e))?;
+            let s = deflection::sweep(r, b_min, b_max, SWEEP_SAMPLES)?;
             let partials: Vec<figures::Partial> = s
                 .series
                 .iter()
@@ -98,7 +99,7 @@ fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, 
             bs.dedup_by(|a, b| (*a - *b).abs() < 1e-9 * b.abs());
             let largest = bs.last().copied().unwrap_or(b);
             let r_max = (1.5 * largest).max(1.6 * extent).min(1e6);
-            let fan = deflection::rays(r, &bs, r_max, RAY_POINTS).map_err(|e| input_error(&e))?;
+            let fan = deflection::rays(r, &bs, r_max, RAY_POINTS)?;
             let paths: Vec<figures::RayPath> =
                 fan.rays.iter().map(|ray| figures::RayPath { x: ray.x.clone(), y: ray.y.clone(), captured: ray.captured }).collect();
             let horizon = (fan.horizon_radius > 0.0).then_some(fan.horizon_radius);
@@ -108,8 +109,8 @@ fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, 
     }
 }
 
-fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, js_sys::Error> {
-    let res = r.evaluate().map_err(|e| input_error(&e))?;
+fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, InputError> {
+    let res = r.evaluate()?;
     match name {
         "amplification" => {
             // The w range spans the diffraction (w ≲ 1) and geometric (w ≫ 1) regimes and
@@ -119,7 +120,7 @@ fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, js_sys::Error> {
                 _ => (0.01, 100.0),
             };
             let c = lensing::wave::amplification_curve(r.offset, w_min, w_max, AMPLIFICATION_SAMPLES)
-                .map_err(|e| input_error(&e))?;
+                ?;
             let abs: Vec<Option<f64>> = c.abs.iter().map(|&v| Some(v)).collect();
             let geo: Option<Vec<Option<f64>>> = c.abs_geometric.as_ref().map(|g| g.iter().map(|&v| Some(v)).collect());
             Ok(figures::amplification(&c.w, &abs, geo.as_deref(), res.w))
@@ -127,7 +128,7 @@ fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, js_sys::Error> {
         "magnification" => {
             let u_max = (3.0 * r.offset).clamp(2.0, 1e6);
             let u_min = (u_max / MAGNIFICATION_SAMPLES as f64).min(0.5 * r.offset).max(1e-10);
-            let c = lensing::magnification_curve(u_min, u_max, MAGNIFICATION_SAMPLES).map_err(|e| input_error(&e))?;
+            let c = lensing::magnification_curve(u_min, u_max, MAGNIFICATION_SAMPLES)?;
             Ok(figures::magnification(&c.offset, &c.total, &c.plus, &c.minus, Some((res.offset, res.total_magnification))))
         }
         _ => Err(unknown("lens", name)),
@@ -143,7 +144,11 @@ fn kind_of(req: &Request) -> &'static str {
     }
 }
 
-pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Rendered, js_sys::Error> {
+/// The figure `name` for `req`, sized by `opts`.
+///
+/// # Errors
+/// The request's own validation errors, or an error on `figure` for an unknown name.
+pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Figure, InputError> {
     let fig = match req {
         Request::Light(r) => light_figure(r, name, opts),
         Request::Lens(r) => lens_figure(r, name),
@@ -151,5 +156,5 @@ pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Rendered, js_
         #[allow(unreachable_patterns)]
         other => Err(unknown(kind_of(other), name)),
     }?;
-    finish(fig, opts)
+    Ok(sized(fig, opts))
 }
