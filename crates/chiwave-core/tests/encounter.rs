@@ -346,9 +346,15 @@ fn result_keys_and_request_enum() {
     // b = 1e7 m over GM/c² of 50 M☉ (1476.625038 m per M☉; deflection sheet §3).
     assert!(rel_diff(v["b_over_gm"].as_f64().unwrap(), 1e7 / (50.0 * 1476.625_038_050)) < 1e-9);
     assert!(v["physical"]["e_rad_j"].as_f64().unwrap() > 0.0);
-    // Strong-field estimate: the placeholder reports itself via a flag, not a number.
-    assert!(v["chi_estimate"].is_null());
-    assert!(v["flags"].as_array().unwrap().iter().any(|f| f["key"] == "strong_field_estimate"));
+    // Strong-field estimate: far from capture it scatters, agrees with the 3PM total to O(1/j⁴)
+    // (Damour 2018 resummation reduces to the PM series at large j; common practice), and is
+    // labelled an estimate by its own flag.
+    let est = v["chi_estimate"].as_f64().unwrap();
+    let chi3 = v["chi"]["3pm"].as_f64().unwrap();
+    assert!(rel_diff(est, chi3) < 1e-3, "{est} vs {chi3}");
+    assert_eq!(v["estimate"]["status"], "scattered");
+    assert!(v["j_critical_estimate"].as_f64().unwrap() > 0.0);
+    assert!(v["flags"].as_array().unwrap().iter().any(|f| f["key"] == "eob_estimate"));
 }
 
 #[test]

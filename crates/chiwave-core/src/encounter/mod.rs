@@ -384,6 +384,8 @@ pub struct GravityResult {
     pub captured: bool,
     /// The estimate's own output, when available.
     pub estimate: Option<eob::Estimate>,
+    /// The strong-field estimate's own capture threshold j_c (null if it predicts none).
+    pub j_critical_estimate: Option<f64>,
     /// E_rad/(M c²), CM frame, O(G³).
     pub e_rad: f64,
     /// J_rad/J at O(G²).
@@ -499,6 +501,7 @@ fn gravity_sources() -> BTreeMap<&'static str, &'static str> {
         ("test_body_pm", "generated in code by finite-part expansion of the geodesic integral; checked against sheet §1.5 χ₄…χ₆"),
         ("j_critical_test_body", "unstable circular orbit of Schwarzschild (deflection sheet §5; MTW §25.5)"),
         ("chi_estimate", "strong-field resummed estimate (sheet §7; Damour 2018 arXiv:1710.10599, Damour & Rettegno 2023 arXiv:2211.01399)"),
+        ("j_critical_estimate", "double root of the estimate's effective radial potential (unstable circular orbit of the resummed w(r); sheet §7)"),
         ("e_rad", "Herrmann, Parra-Martinez, Ruf, Zeng 2021, arXiv:2101.07255 (sheet §3.1)"),
         ("p_rad_cm", "Herrmann, Parra-Martinez, Ruf, Zeng 2021, arXiv:2101.07255 (sheet §3.1)"),
         ("j_rad", "Damour 2020, arXiv:2010.01641 (sheet §3.2)"),
@@ -553,12 +556,17 @@ pub fn gravity(s: &Setup) -> Result<GravityResult, InputError> {
     let j_c = testbody::critical_j(b);
     let chi_for_estimate = [c[0], c[1], c[2] + c[3]];
     let mut flags = Vec::new();
-    let (chi_estimate, captured, estimate) = match eob::estimate(b.gamma, k.nu, k.j, &chi_for_estimate) {
-        Ok(e @ eob::Estimate::Scattered { chi, .. }) => (Some(chi), false, Some(e)),
-        Ok(e @ eob::Estimate::Captured { .. }) => (None, true, Some(e)),
+    let (chi_estimate, captured, estimate, j_critical_estimate) = match eob::details(b.gamma, k.nu, k.j, &chi_for_estimate) {
+        Ok(d) => {
+            flags.extend(d.flags);
+            match d.estimate {
+                e @ eob::Estimate::Scattered { chi, .. } => (Some(chi), false, Some(e), d.j_critical),
+                e @ eob::Estimate::Captured { .. } => (None, true, Some(e), d.j_critical),
+            }
+        }
         Err(err) => {
             flags.push(Flag::new("strong_field_estimate", Level::Caution, None, format!("Strong-field estimate unavailable: {err}.")));
-            (None, false, None)
+            (None, false, None, None)
         }
     };
     // Radiation.
@@ -676,6 +684,7 @@ pub fn gravity(s: &Setup) -> Result<GravityResult, InputError> {
         chi_estimate,
         captured,
         estimate,
+        j_critical_estimate,
         e_rad,
         j_rad,
         p_rad_cm,
