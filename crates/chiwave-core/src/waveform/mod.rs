@@ -37,7 +37,6 @@
 //!   ([`constant_piece`]); it is not Lorentz-covariant under the polarisation map.
 //! * Flux: dE/(du dΩ) = D²(ḣ₊² + ḣ×²)/(16π).
 
-mod bessel;
 pub mod em;
 mod energy;
 mod frames;
