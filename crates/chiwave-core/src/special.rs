@@ -54,6 +54,56 @@ pub fn bessel_k1(x: f64) -> f64 {
     x.bessel_k1()
 }
 
+/// e^x K0(x), the exponentially scaled K0 (no underflow at large x).
+///
+/// # Formula
+/// e^x K0(x) = ∫_0^∞ e^{−2x sinh²(s/2)} ds (from K0(x) = ∫_0^∞ e^{−x cosh s} ds, Abramowitz &
+/// Stegun 1964, eq. 9.6.24); evaluated by the Cephes `k0e` Chebyshev series (see module doc).
+///
+/// # Domain
+/// x > 0. Special cases: +∞ at 0, NaN for x < 0 or NaN, 0 at +∞; ~√(π/(2x)) for large x.
+///
+/// # Examples
+/// ```
+/// // mpmath 1.3, mp.dps = 30, tests/reference/waveform_bessel.py: besselk(0, 10)·e^10
+/// let k = chiwave_core::special::bessel_k0_scaled(10.0);
+/// assert!((k - 0.391631934436598666).abs() < 1e-15);
+/// ```
+pub fn bessel_k0_scaled(x: f64) -> f64 {
+    if x.is_nan() {
+        return f64::NAN;
+    }
+    if x == f64::INFINITY {
+        return 0.0;
+    }
+    x.bessel_k0e()
+}
+
+/// e^x K1(x), the exponentially scaled K1 (no underflow at large x).
+///
+/// # Formula
+/// e^x K1(x) = ∫_0^∞ e^{−2x sinh²(s/2)} cosh s ds (Abramowitz & Stegun 1964, eq. 9.6.24 with
+/// ν = 1, times e^x); evaluated by the Cephes `k1e` Chebyshev series (see module doc).
+///
+/// # Domain
+/// x > 0. Special cases: +∞ at 0, NaN for x < 0 or NaN, 0 at +∞; ~√(π/(2x)) for large x.
+///
+/// # Examples
+/// ```
+/// // mpmath 1.3, mp.dps = 30, tests/reference/waveform_bessel.py: besselk(1, 0.5)·e^0.5
+/// let k = chiwave_core::special::bessel_k1_scaled(0.5);
+/// assert!((k - 2.73100970821178571).abs() < 2e-15);
+/// ```
+pub fn bessel_k1_scaled(x: f64) -> f64 {
+    if x.is_nan() {
+        return f64::NAN;
+    }
+    if x == f64::INFINITY {
+        return 0.0;
+    }
+    x.bessel_k1e()
+}
+
 /// x K0(x), continued to x = 0 by its limit 0.
 ///
 /// # Formula
@@ -102,5 +152,37 @@ pub fn x_k1(x: f64) -> f64 {
         0.0
     } else {
         x * bessel_k1(x)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::numeric::rel_diff;
+
+    #[test]
+    #[allow(clippy::excessive_precision)] // values transcribed from mpmath as printed
+    fn scaled_against_mpmath() {
+        // mpmath 1.3, mp.dps = 30, tests/reference/waveform_bessel.py: besselk(ν, x)·e^x
+        let cases = [
+            (1e-6, 13.9314560050754588, 1000000.99999328427),
+            (0.01, 4.7686940285444619, 100.978648458240051),
+            (0.5, 1.52410938577390953, 2.73100970821178571),
+            (2.0, 0.841568215070771418, 1.03347684706868857),
+            (10.0, 0.391631934436598666, 0.410766570595788751),
+            (100.0, 0.125175621659126579, 0.125799950479578529),
+            (3000.0, 0.0228813275719324368, 0.0228851408088374196),
+        ];
+        for (x, k0, k1) in cases {
+            assert!(rel_diff(bessel_k0_scaled(x), k0) < 1e-14, "K0({x})");
+            assert!(rel_diff(bessel_k1_scaled(x), k1) < 1e-14, "K1({x})");
+            // Consistent with the unscaled functions where those do not underflow.
+            if x < 500.0 {
+                assert!(rel_diff(bessel_k0_scaled(x) * (-x).exp(), bessel_k0(x)) < 1e-14);
+            }
+        }
+        assert!(bessel_k0_scaled(-1.0).is_nan() && bessel_k1_scaled(f64::NAN).is_nan());
+        assert_eq!(bessel_k0_scaled(f64::INFINITY), 0.0);
+        assert_eq!(bessel_k1_scaled(0.0), f64::INFINITY);
     }
 }

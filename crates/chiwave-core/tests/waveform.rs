@@ -265,9 +265,17 @@ fn antenna_pattern_identities() {
     }
 }
 
-fn request(json: &str) -> Result<WaveformResult, chiwave_core::InputError> {
+fn request_any(json: &str) -> Result<WaveformResult, chiwave_core::InputError> {
     let r: WaveformRequest = serde_json::from_str(json).expect("request JSON parses");
     r.evaluate()
+}
+
+/// A gravitational request (panics in the test if the result is an em one).
+fn request(json: &str) -> Result<GravityWaveformResult, chiwave_core::InputError> {
+    request_any(json).map(|r| match r {
+        WaveformResult::Gravity(g) => *g,
+        WaveformResult::Em(_) => panic!("expected a gravitational result"),
+    })
 }
 
 /// Waveform sheet §6 worked example: m1 = m2 = 10 M☉, v = 1000 km/s, b = 1 au, D = 1 Mpc gives a
@@ -332,7 +340,13 @@ fn request_validation() {
     let field = |json: String| request(&json).unwrap_err().field();
     assert_eq!(field(base(r#","samples":1"#)), "samples");
     assert_eq!(field(base(r#","samples":100001"#)), "samples");
-    assert_eq!(field(base(r#","force":"em""#)), "force");
+    assert_eq!(field(base(r#","force":"em""#)), "q1"); // em needs charges
+    assert_eq!(field(base(r#","q1":0.1"#)), "q1"); // gravity refuses charges
+    assert_eq!(field(base(r#","q2":"1e""#)), "q2");
+    for b in ["0", "-1", "1e-7", "2e12", "\"nan\""] {
+        let j = format!(r#"{{"m1":0.5,"m2":0.5,"gamma":1.5,"b":{b},"theta":1.0,"phi":0.5,"u_min":-10,"u_max":10,"energy_flux":false}}"#);
+        assert_eq!(field(j), "b", "b = {b}");
+    }
     assert_eq!(field(base(r#","distance":"1Mpc""#)), "distance");
     assert_eq!(field(base(r#","v":0.5"#)), "gamma");
     assert_eq!(field(r#"{"m1":0.5,"m2":0.5,"gamma":1.0,"b":20,"theta":1.0,"phi":0.5,"u_min":-10,"u_max":10}"#.into()), "gamma");
@@ -356,8 +370,9 @@ mod no_panic {
     proptest! {
         #![proptest_config(ProptestConfig::with_cases(64))]
         #[test]
-        fn valid_ranges_give_finite_strain(g in 1.0000001f64..1e4, b in 1.0f64..1e12, th in 0.0f64..std::f64::consts::PI,
+        fn valid_ranges_give_finite_strain(g in 1.0000001f64..1e4, lb in -6.0f64..12.0, th in 0.0f64..std::f64::consts::PI,
                                            ph in -7.0f64..7.0, u0 in -1e15f64..0.0, m1 in 1e-6f64..1.0) {
+            let b = 10f64.powf(lb);
             let s = Binary::new(m1, 1.0 - m1 + 1e-9, g, b).unwrap();
             for frame in [Frame::Rest2, Frame::Cm] {
                 let w = DirectionWaveform::new(&s, frame, th, ph, DEFAULT_X_NODES).unwrap();
@@ -378,8 +393,156 @@ mod no_panic {
                 spectrum: None, energy_flux: false, quadrupole: true,
             };
             if let Ok(res) = r.evaluate() {
-                prop_assert!(res.h_plus.iter().chain(&res.h_cross).all(|x| x.is_finite()));
+                let g = res.gravity().expect("gravity request gives a gravity result");
+                prop_assert!(g.h_plus.iter().chain(&g.h_cross).all(|x| x.is_finite()));
             }
         }
     }
+}
+
+/// The CLI contract example (issue): b = 1 with m1 = m2 = 1, i.e. b = 0.5 GM/c², must evaluate, and
+/// carry the b validity flag at level invalid; the strain obeys the LO homogeneity D·h(u; b) =
+/// (b'/b) D·h(u b'/b; b') (the O(G²) strain is ∝ m1 m2/b at fixed u/b: sheet §6 scaling, an
+/// independent property of the formula, checked here across two orders of magnitude in b).
+#[test]
+fn small_b_contract_example_works_and_is_flagged() {
+    let j = r#"{"m1":1,"m2":1,"gamma":2,"b":1,"theta":1.1,"phi":0.4,"frame":"rest2","u_min":-5,"u_max":5,"samples":101}"#;
+    let r = request(j).unwrap();
+    assert_eq!(r.u.len(), 101);
+    assert!((r.b_over_m - 0.5).abs() < 1e-15);
+    assert!(r.h_plus.iter().chain(&r.h_cross).all(|x| x.is_finite()));
+    let f = r.flags.iter().find(|f| f.key == "b_weak_field").expect("b flag");
+    assert_eq!(f.level, chiwave_core::validity::Level::Invalid);
+    assert!(f.message.contains("not a prediction"));
+    // Energy balance holds at small b too (closed form ∝ 1/b³, Herrmann et al. 2021).
+    assert!(rel_diff(r.e_rad_flux.unwrap(), r.e_rad_closed) < 1e-8);
+    // Homogeneity: b' = 50 (in M), u' = 100 u; D·h(b) = 100 D·h(b').
+    let big = request(r#"{"m1":1,"m2":1,"gamma":2,"b":100,"theta":1.1,"phi":0.4,"u_min":-500,"u_max":500,"samples":101,"energy_flux":false}"#).unwrap();
+    for i in 0..101 {
+        for (a, c) in [(r.h_plus[i], big.h_plus[i]), (r.h_cross[i], big.h_cross[i])] {
+            assert!((a - 100.0 * c).abs() < 1e-10 * a.abs().max(1e-3 * r.h_plus.iter().fold(0.0f64, |m, x| m.max(x.abs()))), "i={i}: {a} vs {}", 100.0 * c);
+        }
+    }
+    // Levels: caution between 3√3 and 50 GM/c², ok above.
+    let mid = request(r#"{"m1":1,"m2":1,"gamma":2,"b":20,"theta":1.1,"phi":0.4,"u_min":-5,"u_max":5,"samples":3,"energy_flux":false}"#).unwrap();
+    assert_eq!(mid.flags.iter().find(|f| f.key == "b_weak_field").unwrap().level, chiwave_core::validity::Level::Caution);
+    assert_eq!(big.flags.iter().find(|f| f.key == "b_weak_field").unwrap().level, chiwave_core::validity::Level::Ok);
+}
+
+fn em_request(json: &str) -> Result<EmWaveformResult, chiwave_core::InputError> {
+    request_any(json).map(|r| match r {
+        WaveformResult::Em(e) => *e,
+        WaveformResult::Gravity(_) => panic!("expected an em result"),
+    })
+}
+
+const EM_BASE: &str = r#""force":"em","m1":1,"m2":1,"gamma":2,"theta":1.1,"phi":0.4,"u_min":-50,"u_max":50,"samples":11"#;
+
+/// force = "em": the JSON keys of the contract, the energy bookkeeping and the unit conversion.
+#[test]
+fn em_request_contract() {
+    let r = em_request(&format!(r#"{{{EM_BASE},"q1":0.1,"q2":-0.2,"b":20,"spectrum":{{"omega_min":0.01,"omega_max":1,"points":3}}}}"#)).unwrap();
+    let j = serde_json::to_value(&r).unwrap();
+    for k in ["u", "e_theta", "e_phi", "memory", "e_rad_flux", "e_rad_closed", "e_rad_body1", "e_rad_body2", "interference", "flags", "sources", "units", "spectrum", "gamma", "b_over_m"] {
+        assert!(j.get(k).is_some(), "missing key {k}");
+    }
+    assert_eq!(j["force"], "em");
+    assert!(j["memory"]["theta"].is_f64() && j["memory"]["phi"].is_f64());
+    assert!(j["e_theta"].as_array().unwrap().len() == 11 && j["e_phi"].as_array().unwrap().len() == 11);
+    assert!(j["units"].as_str().unwrap().starts_with("Gaussian, c = 1"));
+    assert!(r.sources.iter().any(|s| s.starts_with("e_rad_flux:")) && r.sources.iter().any(|s| s.contains("e_rad_closed")));
+    // Bookkeeping: e_rad_flux = body1 + body2 + interference; e_rad_closed = body1 + body2.
+    let (flux, x) = (r.e_rad_flux.unwrap(), r.interference.unwrap());
+    assert!(rel_diff(flux, r.e_rad_body1 + r.e_rad_body2 + x) < 1e-14);
+    assert!(rel_diff(r.e_rad_closed, r.e_rad_body1 + r.e_rad_body2) < 1e-15);
+    assert!(r.e_rad_flux_rel_error.unwrap() < 1e-9);
+    // Units: bare masses 1, 1 → m/M = 1/2; b = 20 → b/M = 10; charges bare in √G M.
+    // Liénard closed form π q1⁴ q2² (1 + 3γ²)/(12 m1² v b³) (sheet §2), evaluated here by hand.
+    let v = 3f64.sqrt() / 2.0;
+    let e1 = std::f64::consts::PI * 1e-4 * 0.04 * 13.0 / (12.0 * 0.25 * v * 1000.0);
+    assert!(rel_diff(r.e_rad_body1, e1) < 1e-14, "{} vs {e1}", r.e_rad_body1);
+    // Larmor closed form π q1² q2⁴ (1 + 3γ²)/(12 γ m2² v b³) (sheet §2).
+    let e2 = std::f64::consts::PI * 0.01 * 0.0016 * 13.0 / (12.0 * 2.0 * 0.25 * v * 1000.0);
+    assert!(rel_diff(r.e_rad_body2, e2) < 1e-14, "{} vs {e2}", r.e_rad_body2);
+    // Soft-photon limit of the spectrum from the memory (sheet §3).
+    let sp = r.spectrum.as_ref().unwrap();
+    assert_eq!(sp.omega.len(), 3);
+    assert!(rel_diff(sp.zfl_direction, (r.memory.theta.powi(2) + r.memory.phi.powi(2)) / (4.0 * std::f64::consts::PI.powi(2))) < 1e-15);
+    assert!(sp.de_domega_dsolid.iter().all(|x| x.is_finite() && *x >= 0.0));
+}
+
+/// Face-on field by hand (sheet §2): θ = 0, u = 0, m1 = m2 = q1 = q2 = b = 1 bare, so m/M = 1/2 and
+/// b/M = 1/2: a1_y = (q1 q2/m1)/(γ b²) = 4, a2_y = −(q1 q2/m2) γ/b² = −16 at γ = 2, and
+/// D E_φ = −(q1 a1_y + q2 a2_y) = 12, D E_θ = 0.
+#[test]
+fn em_face_on_field_in_units_of_m() {
+    let r = em_request(r#"{"force":"em","m1":1,"m2":1,"q1":1,"q2":1,"gamma":2,"b":1,"theta":0,"phi":0,"u_min":-1,"u_max":1,"samples":3,"energy_flux":false}"#).unwrap();
+    assert!((r.e_phi[1] - 12.0).abs() < 1e-13, "{}", r.e_phi[1]);
+    assert!(r.e_theta[1].abs() < 1e-13);
+    assert!(r.e_rad_flux.is_none() && r.interference.is_none());
+    // Flag: q1 q2 = 1 vs m1 m2 = 1/4 → gravity not negligible.
+    assert!(r.flags.iter().any(|f| f.key == "gravity_neglected" && f.level != chiwave_core::validity::Level::Ok));
+}
+
+/// The charge convention matches the encounter module: its test-charge LO E_rad (encounter/em.rs,
+/// an independent implementation of the Liénard result) equals e_rad_body1, for geometric and
+/// physical inputs; and at low velocity the total (with interference) approaches the
+/// non-relativistic dipole formula of the encounter module, π q1² q2² (q1/m1 − q2/m2)²/(3 v b³)
+/// (encounter sheet §4.4), with relative corrections O(v²).
+#[test]
+fn em_request_agrees_with_encounter_module() {
+    use chiwave_core::encounter::{EncounterRequest, EncounterResult};
+    let cases = [
+        // m1 + m2 = 1: a bare b means b/M in both modules (the waveform reads a bare b in the
+        // units of the bare masses, the encounter in units of GM/c²).
+        (r#""m1":0.25,"m2":0.75,"q1":0.2,"q2":0.5,"gamma":1.5,"b":40"#, false),
+        (r#""m1":"1Msun","m2":"2Msun","q1":"1e19C","q2":"-3e19C","v":"0.3c","b":"1e5km""#, true),
+    ];
+    for (common, physical) in cases {
+        let w = em_request(&format!(r#"{{"force":"em",{common},"theta":0.7,"phi":2.0,"u_min":-10,"u_max":10,"samples":2}}"#)).unwrap();
+        let e: EncounterRequest = serde_json::from_str(&format!(r#"{{"force":"em",{common}}}"#)).unwrap();
+        let EncounterResult::Em(e) = e.evaluate().unwrap() else { panic!("em encounter") };
+        assert!(rel_diff(w.b_over_m, e.b_over_gm) < 1e-14);
+        assert!(rel_diff(w.e_rad_body1, e.e_rad) < 1e-13, "{} vs {}", w.e_rad_body1, e.e_rad);
+        assert_eq!(w.physical.is_some(), physical);
+        if let (Some(wp), Some(ep)) = (&w.physical, &e.physical) {
+            assert!(rel_diff(wp.e_rad_body1_j, ep.e_rad_j) < 1e-12);
+        }
+    }
+    // Dipole limit (v = 0.01): q/m differ, so the dipole term does not vanish.
+    let common = r#""m1":0.5,"m2":0.5,"q1":0.3,"q2":-0.1,"v":0.01,"b":30"#;
+    let w = em_request(&format!(r#"{{"force":"em",{common},"theta":0.7,"phi":2.0,"u_min":-10,"u_max":10,"samples":2}}"#)).unwrap();
+    let e: EncounterRequest = serde_json::from_str(&format!(r#"{{"force":"em",{common}}}"#)).unwrap();
+    let EncounterResult::Em(e) = e.evaluate().unwrap() else { panic!("em encounter") };
+    assert!(rel_diff(w.e_rad_flux.unwrap(), e.e_rad_dipole) < 1e-3, "{} vs {}", w.e_rad_flux.unwrap(), e.e_rad_dipole);
+}
+
+/// em validation: missing, non-finite and misplaced charges, the frame, and gravity-only options
+/// are InputErrors naming the field.
+#[test]
+fn em_request_validation() {
+    let field = |extra: &str| em_request(&format!(r#"{{{EM_BASE},"b":20{extra}}}"#)).unwrap_err().field();
+    assert_eq!(field(""), "q1");
+    assert_eq!(field(r#","q1":0.1"#), "q2");
+    assert_eq!(field(r#","q2":0.1"#), "q1");
+    assert_eq!(field(r#","q1":"nan","q2":0.1"#), "q1");
+    assert_eq!(field(r#","q1":0.1,"q2":"inf""#), "q2");
+    assert_eq!(field(r#","q1":0.1,"q2":"1e300000""#), "q2");
+    assert_eq!(field(r#","q1":"1C","q2":0.1"#), "q1"); // a unit needs physical masses
+    assert_eq!(field(r#","q1":"1kg","q2":0.1"#), "q1"); // not a charge unit
+    assert_eq!(field(r#","q1":1e41,"q2":0.1"#), "q1");
+    assert_eq!(field(r#","q1":0,"q2":0.1"#), "q1*q2");
+    assert_eq!(field(r#","q1":0.1,"q2":0.1,"frame":"cm""#), "frame");
+    assert_eq!(field(r#","q1":0.1,"q2":0.1,"distance":"1Mpc""#), "distance");
+    assert_eq!(field(r#","q1":0.1,"q2":0.1,"quadrupole":true"#), "quadrupole");
+    assert_eq!(field(r#","q1":0.1,"q2":0.1,"spectrum":{"omega_min":1,"omega_max":0.5}"#), "spectrum.omega_max");
+    // Non-finite numbers that JSON cannot carry, through the struct.
+    let mut r: WaveformRequest = serde_json::from_str(&format!(r#"{{{EM_BASE},"b":20,"q1":0.1,"q2":0.1}}"#)).unwrap();
+    r.q1 = Some(f64::NAN.into());
+    assert_eq!(r.evaluate().unwrap_err().field(), "q1");
+    r.q1 = Some(f64::INFINITY.into());
+    assert_eq!(r.evaluate().unwrap_err().field(), "q1");
+    r.q1 = Some(0.1.into());
+    r.gamma = Some(2e3); // above the em module's γ ≤ 1e3
+    assert_eq!(r.evaluate().unwrap_err().field(), "gamma");
 }

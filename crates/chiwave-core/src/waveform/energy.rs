@@ -11,44 +11,10 @@
 
 use super::frames::{Basis, Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
+use crate::encounter::radiated::e_function;
 use crate::error::InputError;
 use crate::numeric::gauss_legendre;
 use serde::Serialize;
-
-/// Herrmann et al. 2021 E(γ) (including the π), sheet §4 form (8 in the f3 denominator, 1/(2 sqrt(γ²−1))
-/// on the last term). Below v = 0.15 the f1/f3 1/p³ cancellation costs digits (about 1e-12 at
-/// v = 0.15), so the low-velocity series of tests/reference/waveform_herrmann.py (sympy, exact
-/// rationals, through v¹⁵; truncation < 2e-13 relative at v = 0.15) is used there.
-// lead: replace with crate::encounter::radiated::e_function at merge
-fn e_function(gamma: f64) -> f64 {
-    let g = gamma;
-    let p2 = (g - 1.0) * (g + 1.0);
-    let v = p2.sqrt() / g;
-    if v < 0.15 {
-        // E/π = Σ c_k v^(2k+1), exact rationals from the sympy series of the closed form
-        // (tests/reference/waveform_herrmann.py); truncation error < 2e-13 relative at v < 0.15.
-        const C: [f64; 8] = [
-            37.0 / 15.0,
-            2393.0 / 840.0,
-            61703.0 / 10080.0,
-            3131839.0 / 354816.0,
-            513183289.0 / 46126080.0,
-            60697345.0 / 4612608.0,
-            588430385.0 / 39207168.0,
-            12755740946147.0 / 762814660608.0,
-        ];
-        let v2 = v * v;
-        let s = C.iter().rev().fold(0.0, |acc, c| acc * v2 + c);
-        return std::f64::consts::PI * v * s;
-    }
-    let p = p2.sqrt();
-    let f1 = (((((210.0 * g - 552.0) * g + 339.0) * g - 912.0) * g + 3148.0) * g - 3336.0) * g + 1151.0;
-    let f1 = f1 / (48.0 * p2 * p);
-    let f2 = -((((35.0 * g + 60.0) * g - 150.0) * g + 76.0) * g - 5.0) / (8.0 * p);
-    let f3 = (2.0 * g * g - 3.0) * ((35.0 * g * g - 30.0) * g * g + 11.0) / (8.0 * p2 * p);
-    let acosh = (g + p).ln();
-    std::f64::consts::PI * (f1 + f2 * ((g + 1.0) / 2.0).ln() + f3 * g * acosh / (2.0 * p))
-}
 
 /// Closed-form radiated 4-momentum in a frame (Herrmann et al. 2021; sheet §4), G = 1.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -395,20 +361,24 @@ mod tests {
     #[test]
     #[allow(clippy::excessive_precision)] // values transcribed from mpmath as printed
     fn e_function_against_mpmath() {
-        // mpmath 1.3, mp.dps = 40, tests/reference/waveform_herrmann.py (sheet §4 form).
+        // The shared E(γ) (crate::encounter::radiated, which replaced this module's private copy)
+        // against mpmath 1.3, mp.dps = 40, tests/reference/waveform_herrmann.py (sheet §4 form).
+        // The former private copy lost up to 7e-12 near v = 0.15 (its 1/p³ cancellation); the
+        // shared function keeps 1e-13 across its series switch.
         let cases = [
-            (1.0001, 0.109608212966153928923443778591, 1e-13), // series branch (v < 0.05)
-            (1.001, 0.347099990874232018124494964448, 1e-13),  // series branch
-            (1.01, 1.11360224350469855262792725357, 1e-12),    // series branch, near its edge
-            (1.02, 1.60157531706892122793136905587, 2e-12), // direct branch, 1/p³ cancellation
-            (1.1, 4.19370490543785152318392250567, 1e-13),
-            (1.5, 24.1982434844978904946125789865, 1e-13),
-            (2.0, 87.8979389569847786688517520174, 1e-13),
-            (5.0, 2547.74245215202205482403197682, 1e-13),
-            (10.0, 24834.3897185454644870861573934, 1e-13),
+            1.0001, 0.109608212966153928923443778591, // series branch
+            1.001, 0.347099990874232018124494964448,
+            1.01, 1.11360224350469855262792725357,
+            1.02, 1.60157531706892122793136905587,
+            1.1, 4.19370490543785152318392250567,
+            1.5, 24.1982434844978904946125789865,
+            2.0, 87.8979389569847786688517520174,
+            5.0, 2547.74245215202205482403197682,
+            10.0, 24834.3897185454644870861573934,
         ];
-        for (g, e, tol) in cases {
-            assert!(rel_diff(e_function(g), e) < tol, "γ={g}: {} vs {e}", e_function(g));
+        for c in cases.chunks(2) {
+            let (g, e) = (c[0], c[1]);
+            assert!(rel_diff(e_function(g), e) < 1e-13, "γ={g}: {} vs {e}", e_function(g));
         }
         // Low-velocity limit E/π → (37/15) v (Newtonian straight line, sheet §4).
         let g = 1.0 + 1e-10;

@@ -36,8 +36,12 @@
 //! * The u-independent O(G) field of the incoming bodies is reported separately
 //!   ([`constant_piece`]); it is not Lorentz-covariant under the polarisation map.
 //! * Flux: dE/(du dΩ) = D²(ḣ₊² + ḣ×²)/(16π).
+//! * The LO strain is homogeneous in the couplings (D·h ∝ m1 m2/b in units of M), so any b > 0
+//!   is computed; requests flag b below a few GM/c² as outside the weak-deflection regime.
+//!
+//! The electromagnetic analogue (two charges, Gaussian units, frame A) is in [`em`]; a request with
+//! `force: "em"` returns an [`EmWaveformResult`].
 
-mod bessel;
 pub mod em;
 mod energy;
 mod frames;
@@ -58,7 +62,8 @@ pub use memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 pub use observer::{antenna_pattern, characteristic_frequency, strain_unit, PhysicalScales};
 pub use quadrupole::quadrupole_hyperbola;
 pub use request::{
-    DetectorOptions, DetectorResult, MemoryPair, PhysicalResult, QuadrupoleResult, SpectrumOptions, SpectrumResult,
-    WaveformForce, WaveformRequest, WaveformResult,
+    DetectorOptions, DetectorResult, EmPhysicalResult, EmSpectrumResult, EmWaveformResult, GravityWaveformResult,
+    MemoryPair, PhysicalResult, QuadrupoleResult, SpectrumOptions, SpectrumResult, ThetaPhi, WaveformForce,
+    WaveformRequest, WaveformResult,
 };
 pub use spectrum::{spectrum_angle_integrated, zfl_from_memory};

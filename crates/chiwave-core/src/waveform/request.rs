@@ -4,6 +4,10 @@
 //! GM/c³, `h_plus`/`h_cross` are D·h/(GM/c²) (dimensionless; multiply by GM/c² and divide by D for
 //! the strain), energies are E/(M c²). Physical (SI) values are in `physical` when the masses are
 //! physical.
+//!
+//! With `force: "em"` the result is an [`EmWaveformResult`] instead (Gaussian units, c = 1, frame
+//! A only): `e_theta`/`e_phi` are D·E in units of c²/√G (charges in units of √G M, the encounter
+//! module's convention), energies are E/(M c²).
 
 use super::energy::{radiated_closed_form, SkyIntegrator, SkyOptions};
 use super::frames::{Binary, Frame};
@@ -12,8 +16,9 @@ use super::memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 use super::observer::{antenna_pattern, PhysicalScales};
 use super::quadrupole::quadrupole_hyperbola;
 use super::spectrum::spectrum_angle_integrated;
+use super::em::{self, EmSystem};
 use crate::error::{finite, in_closed, InputError};
-use crate::units::{parse_length, parse_mass, parse_speed, AngleUnit, Length, Mass, Quantity};
+use crate::units::{parse_charge, parse_length, parse_mass, parse_speed, AngleUnit, Charge, Length, Mass, Quantity};
 use crate::validity::{Flag, Level};
 use serde::{Deserialize, Serialize};
 
@@ -87,7 +92,11 @@ pub struct WaveformRequest {
     /// Relative speed at infinity: "1000km/s", "0.3c" or a bare fraction of c.
     #[serde(default)]
     pub v: Option<Quantity>,
-    /// Impact parameter: bare number = units of GM/c² (M = m1 + m2), or a length with a unit.
+    /// Impact parameter: a bare number is in the geometric unit of the bare masses (so
+    /// b/(GM/c²) = b/(m1 + m2); with physical masses or `nu`, a bare b is in units of GM/c²), or a
+    /// length with a unit. Any 1e-6 ≤ b/(GM/c²) ≤ 1e12 is computed (the LO strain is homogeneous,
+    /// D·h ∝ m1 m2/b); the `b_weak_field` flag marks b below a few GM/c² as outside the
+    /// weak-deflection regime.
     pub b: Quantity,
     /// Observer polar angle from +z (normal to the orbital plane).
     pub theta: f64,
@@ -109,11 +118,14 @@ pub struct WaveformRequest {
     /// Observer distance (physical length, needs physical masses) for the strain at the detector.
     #[serde(default)]
     pub distance: Option<Quantity>,
-    /// Charges (Gaussian, geometric) for force = "em".
+    /// Charge of body 1 for force = "em" (required there, refused for gravity): `"1e"`,
+    /// `"-1e-9C"`, `"3statC"`, or a bare number in units of √G M (geometric Gaussian, G = c = 1,
+    /// M = m1 + m2; the encounter module's convention). A charge with a unit needs physical masses.
     #[serde(default)]
-    pub q1: Option<f64>,
+    pub q1: Option<Quantity>,
+    /// Charge of body 2 (initially at rest in frame A), as `q1`.
     #[serde(default)]
-    pub q2: Option<f64>,
+    pub q2: Option<Quantity>,
     /// Interferometer response (needs `distance` for physical strain; geometric otherwise).
     #[serde(default)]
     pub detector: Option<DetectorOptions>,
@@ -186,9 +198,35 @@ pub struct PhysicalResult {
     pub distance_m: Option<f64>,
 }
 
-/// Waveform result (JSON keys are the CLI contract).
+/// Result of a waveform request, serialised without a tag (an em result carries `"force": "em"`).
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct WaveformResult {
+#[serde(untagged)]
+pub enum WaveformResult {
+    Gravity(Box<GravityWaveformResult>),
+    Em(Box<EmWaveformResult>),
+}
+
+impl WaveformResult {
+    /// The gravitational result, if this is one.
+    pub fn gravity(&self) -> Option<&GravityWaveformResult> {
+        match self {
+            WaveformResult::Gravity(g) => Some(g),
+            WaveformResult::Em(_) => None,
+        }
+    }
+
+    /// The electromagnetic result, if this is one.
+    pub fn em(&self) -> Option<&EmWaveformResult> {
+        match self {
+            WaveformResult::Em(e) => Some(e),
+            WaveformResult::Gravity(_) => None,
+        }
+    }
+}
+
+/// Gravitational waveform result (JSON keys are the CLI contract).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct GravityWaveformResult {
     /// Retarded times, units of GM/c³.
     pub u: Vec<f64>,
     /// D·h₊/(GM/c²), O(G²) part.
@@ -233,6 +271,100 @@ pub struct QuadrupoleResult {
     pub h_plus: Vec<f64>,
     pub h_cross: Vec<f64>,
 }
+
+/// Components of an electromagnetic quantity along e_θ and e_φ.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct ThetaPhi {
+    pub theta: f64,
+    pub phi: f64,
+}
+
+/// Electromagnetic spectrum output (closed-form Bessel spectrum, waveform sheet §2).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct EmSpectrumResult {
+    /// Angular frequency ω, units of c³/(GM).
+    pub omega: Vec<f64>,
+    /// dE/(dω dΩ) at the observer direction (D² absorbed), E in M c², ω in c³/(GM).
+    pub de_domega_dsolid: Vec<f64>,
+    /// dE/dω over the sphere, if asked (interference included).
+    pub de_domega: Option<Vec<f64>>,
+    /// ω → 0 limit of dE/(dω dΩ), |D ΔA_⊥|²/(4π²) from the memory (classical soft-photon limit, sheet §3).
+    pub zfl_direction: f64,
+}
+
+/// Physical (SI) values of an electromagnetic result, when the masses are physical.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct EmPhysicalResult {
+    /// Total mass M in kg.
+    pub total_mass_kg: f64,
+    /// Retarded time in seconds.
+    pub u_s: Vec<f64>,
+    /// Radiated energies in joules (same meaning as the geometric keys).
+    pub e_rad_flux_j: Option<f64>,
+    pub e_rad_closed_j: f64,
+    pub e_rad_body1_j: f64,
+    pub e_rad_body2_j: f64,
+}
+
+/// Electromagnetic waveform result (`force: "em"`; JSON keys are the CLI contract). Frame A
+/// (rest frame of body 2), Gaussian units with c = 1, geometric scaling G = 1 with masses in
+/// units of M = m1 + m2 and charges in units of √G M.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct EmWaveformResult {
+    /// Always "em".
+    pub force: WaveformForce,
+    /// Retarded times, units of GM/c³.
+    pub u: Vec<f64>,
+    /// D·E along e_θ, units of c²/√G (geometric: charge over length), O(q1 q2), interference included.
+    pub e_theta: Vec<f64>,
+    /// D·E along e_φ, same units.
+    pub e_phi: Vec<f64>,
+    /// ∫du D·E = −D ΔA_⊥ along (e_θ, e_φ), units of charge (√G M): the electromagnetic memory.
+    pub memory: ThetaPhi,
+    /// Total radiated energy E/(M c²) with interference: flux integral of D²|E|²/(4π) over u and
+    /// the sphere (body parts in closed form plus the interference integral). None if energy_flux = false.
+    pub e_rad_flux: Option<f64>,
+    /// e_rad_body1 + e_rad_body2: the per-body closed forms, no interference.
+    pub e_rad_closed: f64,
+    /// Liénard closed form for body 1 alone, π q1⁴ q2² (1 + 3γ²)/(12 m1² v b³).
+    pub e_rad_body1: f64,
+    /// Larmor closed form for body 2 alone, π q1² q2⁴ (1 + 3γ²)/(12 γ m2² v b³).
+    pub e_rad_body2: f64,
+    /// Interference part 2∫du dΩ D² E1·E2/(4π) of e_rad_flux (None if energy_flux = false).
+    pub interference: Option<f64>,
+    /// Estimated relative error of e_rad_flux (None if energy_flux = false).
+    pub e_rad_flux_rel_error: Option<f64>,
+    /// Radiated momentum P/(M c) (x, y, z) with interference (None if energy_flux = false).
+    pub p_rad_flux: Option<[f64; 3]>,
+    pub frame: Frame,
+    pub gamma: f64,
+    pub v: f64,
+    /// m1/M, m2/M, b/(GM/c²).
+    pub m1_over_m: f64,
+    pub m2_over_m: f64,
+    pub b_over_m: f64,
+    /// Charges q/(√G M) used.
+    pub q1: f64,
+    pub q2: f64,
+    /// Transverse impulse on body 1, Δp/(M c) = 2 q1 q2/(v b) (along +y).
+    pub impulse: f64,
+    /// Units of the outputs, in words.
+    pub units: &'static str,
+    pub flags: Vec<Flag>,
+    pub sources: Vec<&'static str>,
+    pub spectrum: Option<EmSpectrumResult>,
+    pub physical: Option<EmPhysicalResult>,
+}
+
+const EM_UNITS: &str = "Gaussian, c = 1; geometric scaling G = 1 with M = m1 + m2: u in GM/c³, b in GM/c², charges in √G M, e_theta/e_phi = D·E in c²/√G, energies in M c², momenta in M c, ω in c³/(GM); frame A (rest frame of body 2)";
+
+const EM_SOURCES: [&str; 5] = [
+    "e_theta, e_phi: Liénard–Wiechert radiation field (Jackson, Classical Electrodynamics, 3rd ed. 1999, §14.1) of the two straight lines with their first-order accelerations (waveform reference sheet §2); interference of the two bodies included",
+    "e_rad_body1: Liénard closed form π q1⁴ q2² (1 + 3γ²)/(12 m1² v b³); e_rad_body2: Larmor closed form π q1² q2⁴ (1 + 3γ²)/(12 γ m2² v b³) (sheet §2, DERIVED; Jackson 1999 §14.2); e_rad_closed = e_rad_body1 + e_rad_body2 (no interference)",
+    "e_rad_flux: flux integral of D²|E|²/(4π) over u and the sphere (sheet §2): closed-form body parts plus the interference integral (numerical quadrature)",
+    "memory: ∫du D E = −D ΔA_⊥ with D A = Σ q v/(1 − n·v) and the LO impulse 2 q1 q2/(v b) (sheet §3); zfl_direction: classical soft-photon limit",
+    "spectrum: closed-form Bessel K0/K1 spectrum (sheet §2; Fourier transform of the Coulomb profiles, Gradshteyn & Ryzhik 3.754.2, recalled)",
+];
 
 const SOURCES: [&str; 5] = [
     "LO waveform: derived from the Landau–Lifshitz relaxed Einstein equations in harmonic gauge (waveform reference sheet §1); equivalent to Kovacs & Thorne 1978, Jakobsen et al. 2021 (arXiv:2101.12688), Mougiakakos et al. 2021 (arXiv:2102.08339) by numerical checks",
@@ -292,22 +424,93 @@ fn read_masses(r: &WaveformRequest) -> Result<Masses, InputError> {
     }
 }
 
+/// Inputs shared by the gravitational and the electromagnetic waveform, validated.
+struct Common {
+    ms: Masses,
+    /// m1 + m2 in the units of the input masses (1 when physical).
+    mtot: f64,
+    /// GM/c² in metres, when the masses are physical.
+    l_tot: Option<f64>,
+    gamma: f64,
+    b_over_m: f64,
+    /// Radians.
+    theta: f64,
+    phi: f64,
+    /// Radians per unit of the input angles.
+    au: f64,
+    u: Vec<f64>,
+}
+
+/// Accepted range of b/(GM/c²), M = m1 + m2 (numerical sanity; the LO formulas are homogeneous in b).
+const B_MIN: f64 = 1e-6;
+const B_MAX: f64 = 1e12;
+
+/// Impact parameter below which the gravitational LO waveform is flagged invalid: 3√3 GM/c², the
+/// photon-capture impact parameter of a Schwarzschild mass (Misner, Thorne & Wheeler 1973, §25.6;
+/// common textbook result). Every body with b below it is captured or strongly deflected.
+const B_INVALID: f64 = 5.196_152_422_706_632;
+/// Below this b/(GM/c²) the flag is a caution (common practice, no source): the O(G²) waveform
+/// misses relative corrections of order GM/(c² b) or larger.
+const B_CAUTION: f64 = 50.0;
+
+fn read_charge(field: &'static str, q: Option<&Quantity>, l_tot: Option<f64>) -> Result<f64, InputError> {
+    let q = q.ok_or_else(|| InputError::Missing {
+        field,
+        hint: "force \"em\" needs q1 and q2 (e.g. 1e, -1e-9C, 3statC, or a bare number in units of √G M)".into(),
+    })?;
+    let x = match parse_charge(field, q)? {
+        Charge::Geometric(x) => x,
+        c @ Charge::Gaussian { .. } => match (c.length_m(), l_tot) {
+            (Some(l), Some(lt)) => l / lt,
+            _ => {
+                return Err(InputError::Inconsistent {
+                    field,
+                    reason: "a charge with a unit needs masses with units (e.g. 1.67e-27kg); bare charges are in units of √G M".into(),
+                })
+            }
+        },
+    };
+    finite(field, x)?;
+    if x.abs() > crate::encounter::CHARGE_MAX {
+        return Err(InputError::OutOfRange {
+            field,
+            value: x,
+            allowed: format!("|q|/(√G M) ≤ {:e}", crate::encounter::CHARGE_MAX),
+        });
+    }
+    Ok(x)
+}
+
 impl WaveformRequest {
-    /// Evaluates the request.
+    /// Evaluates the request: the gravitational waveform ([`GravityWaveformResult`]) or, with
+    /// `force = "em"`, the electromagnetic one ([`EmWaveformResult`], frame A only).
     ///
     /// # Errors
-    /// [`InputError`] naming the offending field and its allowed range; `force = "em"` is refused
-    /// until the electromagnetic module is merged.
+    /// [`InputError`] naming the offending field and its allowed range: for example charges
+    /// missing for em or given for gravity (`q1`, `q2`), `frame = "cm"` with em (`frame`),
+    /// b/(GM/c²) outside [1e-6, 1e12] (`b`).
     pub fn evaluate(&self) -> Result<WaveformResult, InputError> {
-        if self.force == WaveformForce::Em {
-            return Err(InputError::Inconsistent {
-                field: "force",
-                reason: "electromagnetic field not merged yet; use force = \"gravity\"".into(),
-            });
+        match self.force {
+            WaveformForce::Gravity => {
+                for (f, q) in [("q1", &self.q1), ("q2", &self.q2)] {
+                    if q.is_some() {
+                        return Err(InputError::Inconsistent {
+                            field: f,
+                            reason: "charges are used only with force = \"em\"; remove q1 and q2 for gravity".into(),
+                        });
+                    }
+                }
+                let c = self.common()?;
+                Ok(WaveformResult::Gravity(Box::new(self.evaluate_gravity(&c)?)))
+            }
+            WaveformForce::Em => {
+                let c = self.common()?;
+                Ok(WaveformResult::Em(Box::new(self.evaluate_em(&c)?)))
+            }
         }
-        if self.q1.is_some() || self.q2.is_some() {
-            return Err(InputError::Inconsistent { field: "q1", reason: "charges are only used with force = \"em\"".into() });
-        }
+    }
+
+    fn common(&self) -> Result<Common, InputError> {
         let ms = read_masses(self)?;
         let mtot = ms.m1 + ms.m2;
         let l_tot = match (ms.l1_m, ms.l2_m) {
@@ -338,12 +541,12 @@ impl WaveformRequest {
                 None => b_len.in_units_of("b", None)?,
             },
         };
-        let sys = Binary::new(ms.m1 / mtot, ms.m2 / mtot, gamma, b_over_m)?;
-        if !(1.0..=1e12).contains(&b_over_m) {
+        finite("b", b_over_m)?;
+        if !(B_MIN..=B_MAX).contains(&b_over_m) {
             return Err(InputError::OutOfRange {
                 field: "b",
                 value: b_over_m,
-                allowed: "1 ≤ b ≤ 1e12 in units of GM/c² (M = m1 + m2)".into(),
+                allowed: format!("{B_MIN:e} ≤ b ≤ {B_MAX:e} in units of GM/c² (M = m1 + m2)"),
             });
         }
         let au = self.angle_unit.unwrap_or(AngleUnit::Rad).radians();
@@ -368,6 +571,18 @@ impl WaveformRequest {
                 allowed: "2 ≤ samples ≤ 100000".into(),
             });
         }
+        let n = self.samples;
+        let du = (self.u_max - self.u_min) / (n - 1) as f64;
+        let u: Vec<f64> = (0..n).map(|i| if i + 1 == n { self.u_max } else { self.u_min + du * i as f64 }).collect();
+        Ok(Common { ms, mtot, l_tot, gamma, b_over_m, theta, phi, au, u })
+    }
+
+    fn evaluate_gravity(&self, c: &Common) -> Result<GravityWaveformResult, InputError> {
+        let (ms, mtot, l_tot, gamma, b_over_m, theta, phi, au) =
+            (&c.ms, c.mtot, c.l_tot, c.gamma, c.b_over_m, c.theta, c.phi, c.au);
+        let u = c.u.clone();
+        let n = u.len();
+        let sys = Binary::new(ms.m1 / mtot, ms.m2 / mtot, gamma, b_over_m)?;
         let distance_m = match &self.distance {
             None => None,
             Some(q) => match parse_length("distance", q)? {
@@ -390,9 +605,6 @@ impl WaveformRequest {
             });
         }
 
-        let n = self.samples;
-        let du = (self.u_max - self.u_min) / (n - 1) as f64;
-        let u: Vec<f64> = (0..n).map(|i| if i + 1 == n { self.u_max } else { self.u_min + du * i as f64 }).collect();
         let w = DirectionWaveform::new(&sys, self.frame, theta, phi, DEFAULT_X_NODES)?;
         let mut h_plus = Vec::with_capacity(n);
         let mut h_cross = Vec::with_capacity(n);
@@ -414,7 +626,7 @@ impl WaveformRequest {
         let constant: MemoryPair = constant_piece(&sys, self.frame, theta, phi)?.into();
 
         // Flags.
-        let mut flags = Vec::new();
+        let mut flags = vec![b_flag(b_over_m)];
         let chi = 2.0 * (2.0 * gamma * gamma - 1.0) * sys.cm_energy_ratio() / (b_over_m * (gamma * gamma - 1.0));
         flags.push(Flag::small_parameter(
             "weak_deflection",
@@ -499,7 +711,7 @@ impl WaveformRequest {
         } else {
             None
         };
-        Ok(WaveformResult {
+        Ok(GravityWaveformResult {
             u,
             h_plus,
             h_cross,
@@ -525,9 +737,142 @@ impl WaveformRequest {
             quadrupole,
         })
     }
+
+    fn evaluate_em(&self, c: &Common) -> Result<EmWaveformResult, InputError> {
+        if self.frame != Frame::Rest2 {
+            return Err(InputError::Inconsistent {
+                field: "frame",
+                reason: "only frame = \"rest2\" (rest frame of body 2) is available for force = \"em\"".into(),
+            });
+        }
+        for (field, given) in [
+            ("distance", self.distance.is_some()),
+            ("detector", self.detector.is_some()),
+            ("quadrupole", self.quadrupole),
+        ] {
+            if given {
+                return Err(InputError::Inconsistent {
+                    field,
+                    reason: "not available for force = \"em\" (gravity only); the em result is D·E in geometric Gaussian units".into(),
+                });
+            }
+        }
+        let q1 = read_charge("q1", self.q1.as_ref(), c.l_tot)?;
+        let q2 = read_charge("q2", self.q2.as_ref(), c.l_tot)?;
+        let (m1, m2) = (c.ms.m1 / c.mtot, c.ms.m2 / c.mtot);
+        let sys = EmSystem::new(m1, m2, q1, q2, c.gamma, c.b_over_m)?;
+        let f = em::field(&sys, c.theta, c.phi, &c.u);
+        let mem = em::memory(&sys, c.theta, c.phi);
+        let e1 = sys.body1_energy_closed();
+        let e2 = sys.body2_energy_closed();
+        let energies = if self.energy_flux { Some(em::energies(&sys)) } else { None };
+        let spectrum = match &self.spectrum {
+            None => None,
+            Some(o) => {
+                let omega = omega_grid(o)?;
+                let de = em::spectrum(&sys, c.theta, c.phi, &omega);
+                let de_int = if o.angle_integrated { Some(em::spectrum_integrated(&sys, &omega)) } else { None };
+                Some(EmSpectrumResult {
+                    omega,
+                    de_domega_dsolid: de,
+                    de_domega: de_int,
+                    zfl_direction: (mem[0] * mem[0] + mem[1] * mem[1]) / (4.0 * std::f64::consts::PI.powi(2)),
+                })
+            }
+        };
+        let mut flags = sys.flags();
+        // Gravity between the bodies is left out of this force law: compare the couplings.
+        let g_over_q = m1 * m2 / (q1 * q2).abs();
+        flags.push(Flag::small_parameter(
+            "gravity_neglected",
+            g_over_q,
+            0.01,
+            0.3,
+            [
+                "gravity is negligible next to the Coulomb coupling (G m1 m2 ≪ |q1 q2|)",
+                "G m1 m2/|q1 q2| is not negligible: the gravitational deflection and radiation, left out here, correct the result at that relative size",
+                "gravity is comparable to or stronger than the Coulomb coupling: this electromagnetic-only result misses the dominant interaction",
+            ],
+        ));
+        flags.push(Flag::new(
+            "units",
+            Level::Ok,
+            None,
+            "Gaussian units with c = 1 (Coulomb force q1 q2/r²); SI charges were converted with q1 q2 → q1 q2/(4π ε0).",
+        ));
+        if let Some(e) = &energies {
+            if e.rel_error_estimate > 1e-8 {
+                flags.push(Flag::new(
+                    "flux_resolution",
+                    Level::Caution,
+                    Some(e.rel_error_estimate),
+                    "The estimated relative error of e_rad_flux exceeds 1e-8; compare with e_rad_closed.",
+                ));
+            }
+        }
+        let physical = c.l_tot.map(|l| {
+            let cc = crate::units::codata2018::C;
+            let mc2 = l * cc.powi(4) / crate::units::codata2018::G;
+            EmPhysicalResult {
+                total_mass_kg: l * cc * cc / crate::units::codata2018::G,
+                u_s: c.u.iter().map(|x| x * l / cc).collect(),
+                e_rad_flux_j: energies.as_ref().map(|e| e.total_flux * mc2),
+                e_rad_closed_j: (e1 + e2) * mc2,
+                e_rad_body1_j: e1 * mc2,
+                e_rad_body2_j: e2 * mc2,
+            }
+        });
+        Ok(EmWaveformResult {
+            force: WaveformForce::Em,
+            u: c.u.clone(),
+            e_theta: f.e_theta,
+            e_phi: f.e_phi,
+            memory: ThetaPhi { theta: mem[0], phi: mem[1] },
+            e_rad_flux: energies.as_ref().map(|e| e.total_flux),
+            e_rad_closed: e1 + e2,
+            e_rad_body1: e1,
+            e_rad_body2: e2,
+            interference: energies.as_ref().map(|e| e.interference),
+            e_rad_flux_rel_error: energies.as_ref().map(|e| e.rel_error_estimate),
+            p_rad_flux: energies.as_ref().map(|e| e.momentum),
+            frame: Frame::Rest2,
+            gamma: c.gamma,
+            v: sys.v(),
+            m1_over_m: m1,
+            m2_over_m: m2,
+            b_over_m: c.b_over_m,
+            q1,
+            q2,
+            impulse: sys.impulse(),
+            units: EM_UNITS,
+            flags,
+            sources: EM_SOURCES.to_vec(),
+            spectrum,
+            physical,
+        })
+    }
 }
 
-fn spectrum_result(sys: &Binary, frame: Frame, w: &DirectionWaveform, o: &SpectrumOptions) -> Result<SpectrumResult, InputError> {
+/// The validity flag on b for the gravitational LO waveform (thresholds at [`B_INVALID`], [`B_CAUTION`]).
+fn b_flag(b_over_m: f64) -> Flag {
+    let (level, msg) = if b_over_m < B_INVALID {
+        (
+            Level::Invalid,
+            "b is below 3√3 GM/c² (the photon-capture impact parameter): the leading-order (weak-deflection) waveform is not a prediction here; the numbers only show the homogeneous O(G²) formula (D·h in units of GM/c², scaling as 1/b)",
+        )
+    } else if b_over_m < B_CAUTION {
+        (
+            Level::Caution,
+            "b is only a few tens of GM/c² or less: the leading-order (weak-deflection) waveform misses corrections of relative size ~GM/(c² b) and larger; treat it as indicative",
+        )
+    } else {
+        (Level::Ok, "b ≫ GM/c²: the weak-deflection expansion of the waveform applies")
+    };
+    Flag::new("b_weak_field", level, Some(b_over_m), msg)
+}
+
+/// Log-spaced ω grid of the spectrum options, validated.
+fn omega_grid(o: &SpectrumOptions) -> Result<Vec<f64>, InputError> {
     crate::error::positive("spectrum.omega_min", o.omega_min)?;
     crate::error::positive("spectrum.omega_max", o.omega_max)?;
     if o.omega_max <= o.omega_min {
@@ -545,8 +890,11 @@ fn spectrum_result(sys: &Binary, frame: Frame, w: &DirectionWaveform, o: &Spectr
         });
     }
     let r = (o.omega_max / o.omega_min).ln();
-    let omega: Vec<f64> =
-        (0..o.points).map(|i| o.omega_min * (r * i as f64 / (o.points - 1) as f64).exp()).collect();
+    Ok((0..o.points).map(|i| o.omega_min * (r * i as f64 / (o.points - 1) as f64).exp()).collect())
+}
+
+fn spectrum_result(sys: &Binary, frame: Frame, w: &DirectionWaveform, o: &SpectrumOptions) -> Result<SpectrumResult, InputError> {
+    let omega = omega_grid(o)?;
     let de: Vec<f64> = omega.iter().map(|&x| w.spectrum(x)).collect();
     let de_int = if o.angle_integrated {
         let opts = SkyOptions { n_polar: 12, n_azimuth: 16, n_u: 24, n_x: 24 };

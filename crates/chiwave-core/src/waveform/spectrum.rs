@@ -13,13 +13,13 @@
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]
 
-use super::bessel::k01_scaled;
 use super::energy::SkyIntegrator;
 use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, RestKernel};
 use super::memory::memory_braginsky_thorne;
 use super::SkyOptions;
 use crate::error::InputError;
+use crate::special::{bessel_k0_scaled, bessel_k1_scaled};
 use num_complex::Complex64;
 
 impl RestKernel {
@@ -29,7 +29,7 @@ impl RestKernel {
         let b = self.b;
         let w = omega * self.one_m_nxv;
         let z = w * b / v;
-        let (k0s, k1s) = k01_scaled(z);
+        let (k0s, k1s) = (bessel_k0_scaled(z), bessel_k1_scaled(z));
         let ez = (-z).exp();
         let (k0, k1) = (k0s * ez, k1s * ez);
         let ph = Complex64::from_polar(1.0, -omega * self.ny_b);
@@ -50,7 +50,7 @@ impl RestKernel {
             }
             let d = d2.sqrt();
             let x = omega * d;
-            let (a0, a1) = k01_scaled(x);
+            let (a0, a1) = (bessel_k0_scaled(x), bessel_k1_scaled(x));
             let ex = (-x).exp();
             let (k0, k1) = (a0 * ex, a1 * ex);
             let sa = al.sqrt();
