@@ -1,5 +1,5 @@
 """Reference values e^x K0(x), e^x K1(x) for the chiwave-core waveform Bessel routine
-(src/waveform/bessel.rs). mpmath 1.3, mp.dps = 30."""
+(src/special.rs (scaled K0, K1)). mpmath 1.3, mp.dps = 30."""
 import mpmath as mp
 
 mp.mp.dps = 30

@@ -92,9 +92,8 @@ pub struct WaveformRequest {
     /// Relative speed at infinity: "1000km/s", "0.3c" or a bare fraction of c.
     #[serde(default)]
     pub v: Option<Quantity>,
-    /// Impact parameter: a bare number is in the geometric unit of the bare masses (so
-    /// b/(GM/c²) = b/(m1 + m2); with physical masses or `nu`, a bare b is in units of GM/c²), or a
-    /// length with a unit. Any 1e-6 ≤ b/(GM/c²) ≤ 1e12 is computed (the LO strain is homogeneous,
+    /// Impact parameter: a bare number is b/(GM/c²) with M = m1 + m2 (as for the encounter
+    /// request), or a length with a unit (which needs physical masses). Any 1e-6 ≤ b/(GM/c²) ≤ 1e12 is computed (the LO strain is homogeneous,
     /// D·h ∝ m1 m2/b); the `b_weak_field` flag marks b below a few GM/c² as outside the
     /// weak-deflection regime.
     pub b: Quantity,
@@ -532,10 +531,10 @@ impl WaveformRequest {
             }
             (None, None) => return Err(InputError::Missing { field: "gamma", hint: "give gamma (> 1) or v".into() }),
         };
-        // b in units of GM/c² (M = m1 + m2).
+        // b in units of GM/c² (M = m1 + m2), as for the encounter request: a bare number is b/M.
         let b_len = parse_length("b", &self.b)?;
         let b_over_m = match b_len {
-            Length::Geometric(x) => x / mtot,
+            Length::Geometric(x) => x,
             Length::Physical { m } => match l_tot {
                 Some(l) => m / l,
                 None => b_len.in_units_of("b", None)?,
