@@ -92,16 +92,30 @@ fn request_from(p: &Parsed) -> Result<Request, Failure> {
                 let name = rest.split('`').next().unwrap_or("");
                 return input_failure(format!("--{}: required for `{}`", name.replace('_', "-"), p.command));
             }
-            return input_failure(format!("{}: {inner}", p.command));
+            // A type error inside the tagged request loses its path: find the option by its value.
+            let quoted = inner.split('"').nth(1).unwrap_or("");
+            match p.fields.iter().find(|(_, v)| v.as_str() == Some(quoted)) {
+                Some((f, _)) if !quoted.is_empty() => return type_failure(p, f, &inner),
+                _ => return input_failure(format!("{}: {inner}", p.command)),
+            }
         }
         let field = path.split('.').next().unwrap_or(&path).to_string();
+        type_failure(p, &field, &inner)
+    })
+}
+
+/// The one-line message for a value of the wrong type given to the option of `field`.
+fn type_failure(p: &Parsed, field: &str, inner: &str) -> Failure {
+    {
+        let field = field.to_string();
         let given = p.fields.get(&field).map(|v| v.to_string()).unwrap_or_default();
         let lower = given.trim_matches('"').to_ascii_lowercase();
         if ["nan", "inf", "-inf", "+inf", "infinity", "-infinity"].contains(&lower.as_str()) {
             return input_failure(format!("{}: got {}, which is not a finite number", p.option_for(&field), given.trim_matches('"')));
         }
-        input_failure(format!("{}: cannot use {given}: {inner}", p.option_for(&field)))
-    })
+        let expected = if inner.contains("expected f64") || inner.contains("expected usize") { "; expected a number".to_string() } else { format!(": {inner}") };
+        input_failure(format!("{}: cannot use {given}{expected}", p.option_for(&field)))
+    }
 }
 
 fn title_of(req: &Request) -> &'static str {

@@ -179,9 +179,13 @@ pub fn csv(v: &Value) -> String {
             _ => None,
         })
         .collect();
-    if let Some((_, first)) = arrays.first() {
+    // The column length: that of the sampling variable when there is one (so that a 3-vector such
+    // as p_rad is not taken for a column when there happen to be 3 samples), else the longest.
+    let axis = ["u", "omega", "b", "w", "x"].iter().find_map(|k| arrays.iter().find(|(name, _)| name.as_str() == *k));
+    if let Some((_, first)) = axis.or_else(|| arrays.iter().max_by_key(|(_, a)| a.len())) {
         let n = first.len();
-        let cols: Vec<_> = arrays.iter().filter(|(_, a)| a.len() == n).collect();
+        let vectors = ["p_rad_flux", "p_rad_closed", "momentum"];
+        let cols: Vec<_> = arrays.iter().filter(|(k, a)| a.len() == n && (n > 3 || !vectors.contains(&k.as_str()))).collect();
         let mut s = cols.iter().map(|(k, _)| k.as_str()).collect::<Vec<_>>().join(",");
         s.push('\n');
         for i in 0..n {
