@@ -138,9 +138,9 @@ fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, InputError> {
 }
 
 /// Points of the χ(b) / χ(j) sweep (log-spaced; ≈1 ms natively for 500).
-const CHI_SWEEP_SAMPLES: usize = 360;
+const CHI_SWEEP_SAMPLES: usize = 300;
 /// Points of the estimate's relative orbit.
-const ORBIT_SAMPLES: usize = 900;
+const ORBIT_SAMPLES: usize = 700;
 
 fn encounter_figure(r: &EncounterRequest, name: &str, opts: &Options) -> Result<Figure, InputError> {
     use chiwave_core::encounter::{self as enc, EncounterResult, SweepVar};
