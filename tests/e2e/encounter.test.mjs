@@ -152,6 +152,7 @@ test('encounter: physical units and the electromagnetic table', async () => {
   assert.equal(await page.locator(`${V} table[data-role="orders"] tr[data-order]`).count(), 4);
   assert.ok((await page.locator(`${V} [data-role="chi_test_exact"]`).getAttribute('data-source')).includes('Darwin'));
   assert.match(await page.textContent(`${V} [data-role="plot-note"]`), /gravity only/);
+  assert.ok(await page.locator('[data-plot="encounter-chi"]').isHidden(), 'no gravity figure under an em result');
   await page.screenshot({ path: path.join(artifacts, 'encounter-em.png'), fullPage: true });
   await pick('#f-encounter-force', 'gravity');
 });

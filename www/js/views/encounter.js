@@ -320,6 +320,7 @@ function makeEncounter(core) {
     const captured = grav ? res.captured : res.fall_to_centre;
     const head = [el('span', {}, grav ? 'χ (3PM, with radiation reaction) = ' : 'χ (3PL) = '),
       el('span', { class: 'big', 'data-role': grav ? 'chi-3pm' : 'chi-3pl', 'data-value': exact(best), tabindex: '0', 'data-source': src(grav ? '3pm' : '3pl') }, fmt(A(best), 7)), ` ${au}`];
+    if (captured) head.push(el('span', { class: 'sep', text: ' (formal only: outside validity)' }));
     if (grav) {
       head.push(el('span', { class: 'sep', text: ' · strong-field estimate: ' }));
       head.push(res.captured ? badge('captured', 'captured', src('chi_estimate')) : el('span', { class: 'big2', 'data-role': 'chi-estimate', 'data-value': exact(res.chi_estimate), tabindex: '0', 'data-source': src('chi_estimate') }, res.chi_estimate === null ? '—' : `${fmt(A(res.chi_estimate), 6)} ${au}`));
