@@ -151,7 +151,8 @@ pub fn nr_comparison(rows: &[NrComparison], angle: AngleUnit) -> Figure {
         let (a, b) = (&w[0].input, &w[1].input);
         (a.e_over_m - b.e_over_m).abs() <= 1e-9 * a.e_over_m.abs() && (a.nu - b.nu).abs() <= 1e-9 * a.nu.abs()
     });
-    let preds: [(&str, [u8; 3], fn(&NrComparison) -> Option<f64>); 5] = [
+    type Pick = fn(&NrComparison) -> Option<f64>;
+    let preds: [(&str, crate::Rgb, Pick); 5] = [
         ("1PM", palette::INDIGO, |c| Some(c.chi.pm1)),
         ("2PM", palette::AMBER, |c| Some(c.chi.pm2)),
         ("3PM", palette::MOSS, |c| Some(c.chi.pm3)),
@@ -215,7 +216,7 @@ mod tests {
         let fig = chi_sweep(&s, Some((50.0, 0.1)), AngleUnit::Rad);
         let band = fig.bands.iter().find(|b| b.label.starts_with("test body captured")).expect("capture band");
         // mpmath 1.3, dps 40 (tests/reference/encounter_mpmath.py): jcrit(γ = 1.1) = 4.724555912615340
-        assert!((band.x1 - 4.724555912615340).abs() < 1e-12);
+        assert!((band.x1 - 4.724_555_912_615_34).abs() < 1e-12);
         let (svg, fr) = render(&fig).unwrap();
         assert!(fr.x_log && fr.y_log);
         for label in ["1PM", "2PM", "3PM conservative", "3PM (with radiation reaction)", "exact test body (ν → 0)", "strong-field estimate", "Newtonian", "test body captured (j ≤ j_c)", "this request (3PM)", "reduced angular momentum j", "CM scattering angle χ [rad]"] {
