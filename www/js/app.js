@@ -50,7 +50,8 @@ async function start() {
   document.getElementById('version').textContent = `chiwave ${info.version}`;
 
   for (const spec of VIEWS) {
-    const view = makeView(spec, core);
+    // A view either declares fields for the shared machinery or builds itself (spec.make).
+    const view = spec.make ? spec.make(core) : makeView(spec, core);
     views.set(spec.id, view);
     main.append(view.root);
     const tab = el('button', { type: 'button', role: 'tab', id: `tab-${spec.id}`, 'aria-controls': view.root.id, text: spec.title,

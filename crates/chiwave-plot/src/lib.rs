@@ -12,6 +12,7 @@
 //! and the same code runs natively and in wasm without touching the DOM.
 
 pub mod figures;
+pub mod figures_encounter;
 pub mod scene;
 pub mod ticks;
 

@@ -1,7 +1,8 @@
 //! Figure dispatch, shared by the page and the CLI: request + figure name → the core's plot data
 //! → one builder of [`crate::figures`]. No physics here: every number comes from a core function.
 
-use crate::{figures, Figure};
+use crate::{figures, figures_encounter, Figure};
+use chiwave_core::encounter::EncounterRequest;
 use chiwave_core::deflection::{self, LightRequest};
 use chiwave_core::error::InputError;
 use chiwave_core::lensing::{self, LensRequest};
@@ -32,6 +33,7 @@ pub fn names(kind: &str) -> &'static [&'static str] {
     match kind {
         "light" => &["alpha_b", "rays"],
         "lens" => &["amplification", "magnification"],
+        "encounter" => &["chi_b", "chi_j", "orbits"],
         _ => &[],
     }
 }
@@ -135,10 +137,47 @@ fn lens_figure(r: &LensRequest, name: &str) -> Result<Figure, InputError> {
     }
 }
 
+/// Points of the χ(b) / χ(j) sweep (log-spaced; ≈1 ms natively for 500).
+const CHI_SWEEP_SAMPLES: usize = 300;
+/// Points of the estimate's relative orbit.
+const ORBIT_SAMPLES: usize = 700;
+
+fn encounter_figure(r: &EncounterRequest, name: &str, opts: &Options) -> Result<Figure, InputError> {
+    use chiwave_core::encounter::{self as enc, EncounterResult, SweepVar};
+    let res = r.evaluate()?;
+    let g = match res {
+        EncounterResult::Gravity(g) => g,
+        EncounterResult::Em(_) => {
+            return Err(InputError::Inconsistent { field: "force", reason: format!("figure '{name}' is available for force \"gravity\" only") })
+        }
+    };
+    match name {
+        "chi_b" | "chi_j" => {
+            let (var, x, xc) = if name == "chi_b" { (SweepVar::B, g.b_over_gm, g.b_critical_test_body) } else { (SweepVar::J, g.j, g.j_critical_test_body) };
+            // From inside the capture region to deep in the weak field, always containing x.
+            let lo = (0.5 * xc).min(0.5 * x).max(2e-6);
+            let hi = (30.0 * x).max(300.0 * xc).min(1e55).max(4.0 * lo);
+            let s = enc::chi_sweep(r, var, lo, hi, CHI_SWEEP_SAMPLES)?;
+            Ok(figures_encounter::chi_sweep(&s, Some((x, g.chi.pm3)), opts.angle()?))
+        }
+        "orbits" => {
+            let c = &g.coefficients;
+            let o = enc::eob::orbit(g.gamma, g.nu, g.j, &[c.chi1, c.chi2, c.chi3], ORBIT_SAMPLES)?;
+            let r_min = match g.estimate {
+                Some(enc::eob::Estimate::Scattered { r_min, .. }) => Some(r_min),
+                _ => None,
+            };
+            Ok(figures_encounter::orbits(&o, g.kinematics.m1, g.kinematics.m2, r_min))
+        }
+        _ => Err(unknown("encounter", name)),
+    }
+}
+
 fn kind_of(req: &Request) -> &'static str {
     match req {
         Request::Light(_) => "light",
         Request::Lens(_) => "lens",
+        Request::Encounter(_) => "encounter",
         #[allow(unreachable_patterns)]
         _ => "this kind",
     }
@@ -152,6 +191,7 @@ pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Figure, Input
     let fig = match req {
         Request::Light(r) => light_figure(r, name, opts),
         Request::Lens(r) => lens_figure(r, name),
+        Request::Encounter(r) => encounter_figure(r, name, opts),
         // Kinds without figures yet: say which kind, so the page can show it next to the plot.
         #[allow(unreachable_patterns)]
         other => Err(unknown(kind_of(other), name)),

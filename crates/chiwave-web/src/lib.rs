@@ -13,9 +13,12 @@ use serde::Serialize;
 use chiwave_plot::scene;
 use wasm_bindgen::prelude::*;
 
+mod encounter;
+pub use encounter::encounter_nr;
+
 
 /// A JS `Error` with `field` and `kind` properties.
-fn js_error(kind: &str, field: &str, message: &str) -> js_sys::Error {
+pub(crate) fn js_error(kind: &str, field: &str, message: &str) -> js_sys::Error {
     let e = js_sys::Error::new(message);
     // Reflect::set only fails on frozen objects; a fresh Error is not frozen.
     let _ = js_sys::Reflect::set(&e, &JsValue::from_str("field"), &JsValue::from_str(field));
