@@ -27,9 +27,9 @@ pub mod codata2018 {
     /// Elementary charge, C (exact, SI 2019).
     pub const E_CHARGE: f64 = 1.602_176_634e-19;
     /// Vacuum electric permittivity ε0, F m⁻¹ (CODATA 2018: 8.854 187 8128(13) e-12).
-    pub const EPSILON0: f64 = 8.854_187_8128e-12;
+    pub const EPSILON0: f64 = 8.854_187_812_8e-12;
     /// Electron mass, kg (CODATA 2018: 9.109 383 7015(28) e-31).
-    pub const M_ELECTRON: f64 = 9.109_383_7015e-31;
+    pub const M_ELECTRON: f64 = 9.109_383_701_5e-31;
     /// Proton mass, kg (CODATA 2018: 1.672 621 923 69(51) e-27).
     pub const M_PROTON: f64 = 1.672_621_923_69e-27;
 }
