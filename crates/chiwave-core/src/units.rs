@@ -464,7 +464,7 @@ mod tests {
         // IAU 2015 B2 parsec = 30856775814913672.79 m (deflection sheet §7, from its definition).
         assert!((PC / 30_856_775_814_913_672.79 - 1.0).abs() < 1e-15);
         // GM☉/c² = 1476.625038050 m (deflection sheet §3).
-        assert!((SUN_LENGTH_M - 1476.625_038_050).abs() < 1e-8);
+        assert!((SUN_LENGTH_M - 1_476.625_038_050).abs() < 1e-8);
         // Nominal solar mass 1.98841e30 kg (IAU 2015 B3 with CODATA 2018 G; sheet §7).
         assert!((M_SUN_KG / 1.98841e30 - 1.0).abs() < 1e-5);
         // ħ = 1.054571817e-34 J s (CODATA 2018).
