@@ -13,6 +13,8 @@
 
 pub mod figures;
 pub mod figures_encounter;
+pub mod figures_radiation;
+pub mod heatmap;
 pub mod scene;
 pub mod ticks;
 
@@ -156,6 +158,9 @@ pub struct Figure {
     pub equal_aspect: bool,
     pub width: u32,
     pub height: u32,
+    /// A heat-map layer under the series (sky maps), with its colour bar in the title row.
+    #[serde(default)]
+    pub heat: Option<heatmap::Heat>,
 }
 
 impl Figure {
@@ -172,6 +177,7 @@ impl Figure {
             equal_aspect: false,
             width: 760,
             height: 460,
+            heat: None,
         }
     }
 }
@@ -514,7 +520,15 @@ pub fn render(fig: &Figure) -> Result<(String, PlotFrame), PlotError> {
                 chart.draw_series(std::iter::once(Rectangle::new([(a, y0), (b2, y1)], c.filled()))).map_err(perr)?;
             }
         }
-        // Grid lines at major ticks.
+        // Heat-map cells (over the bands, under the grid and the series).
+        if let Some(heat) = &fig.heat {
+            let tx = |v: f64| if fig.x.log { v.log10() } else { v };
+            let ty = |v: f64| if fig.y.log { v.log10() } else { v };
+            let to_px = |x: f64, y: f64| chart.backend_coord(&(tx(x).clamp(x0, x1), ty(y).clamp(y0, y1)));
+            heatmap::draw_cells(&root, heat, &to_px)?;
+        }
+        // Grid lines at major ticks (light over a heat map).
+        let grid = if fig.heat.is_some() { WHITE.mix(0.45) } else { grid.mix(1.0) };
         for t in xt.iter().filter(|t| t.major) {
             chart.draw_series(std::iter::once(PathElement::new(vec![(t.at, y0), (t.at, y1)], grid.stroke_width(1)))).map_err(perr)?;
         }
@@ -611,6 +625,9 @@ pub fn render(fig: &Figure) -> Result<(String, PlotFrame), PlotError> {
         let title_font = (FONT, fs(17.0), FontStyle::Bold).into_font().color(&ink);
         root.draw(&Text::new(fig.title.clone(), (l, 16), title_font.pos(Pos::new(HPos::Left, VPos::Top)))).map_err(perr)?;
 
+        if let Some(heat) = &fig.heat {
+            heatmap::draw_colour_bar(&root, heat, r)?;
+        }
         draw_legend(&root, fig, (l, t, r, b))?;
         root.present().map_err(perr)?;
     }

@@ -1,8 +1,9 @@
 //! Figure dispatch, shared by the page and the CLI: request + figure name → the core's plot data
 //! → one builder of [`crate::figures`]. No physics here: every number comes from a core function.
 
-use crate::{figures, figures_encounter, Figure};
+use crate::{figures, figures_encounter, figures_radiation, Figure};
 use chiwave_core::encounter::EncounterRequest;
+use chiwave_core::waveform::{sky_map, Binary, Frame, SkyQuantity, SpectrumOptions, WaveformRequest, WaveformResult, GravityWaveformResult};
 use chiwave_core::deflection::{self, LightRequest};
 use chiwave_core::error::InputError;
 use chiwave_core::lensing::{self, LensRequest};
@@ -34,6 +35,7 @@ pub fn names(kind: &str) -> &'static [&'static str] {
         "light" => &["alpha_b", "rays"],
         "lens" => &["amplification", "magnification"],
         "encounter" => &["chi_b", "chi_j", "orbits"],
+        "waveform" => &["strain", "sky", "sky_memory", "spectrum", "slow_motion"],
         _ => &[],
     }
 }
@@ -178,6 +180,7 @@ fn kind_of(req: &Request) -> &'static str {
         Request::Light(_) => "light",
         Request::Lens(_) => "lens",
         Request::Encounter(_) => "encounter",
+        Request::Waveform(_) => "waveform",
         #[allow(unreachable_patterns)]
         _ => "this kind",
     }
@@ -192,9 +195,152 @@ pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Figure, Input
         Request::Light(r) => light_figure(r, name, opts),
         Request::Lens(r) => lens_figure(r, name),
         Request::Encounter(r) => encounter_figure(r, name, opts),
+        Request::Waveform(r) => waveform_figure(r, name),
         // Kinds without figures yet: say which kind, so the page can show it next to the plot.
         #[allow(unreachable_patterns)]
         other => Err(unknown(kind_of(other), name)),
     }?;
     Ok(sized(fig, opts))
+}
+
+/// Sky-map grid of the "sky" figures (cell centres): 24 × 48 cells of 7.5°.
+pub const SKY_N_THETA: usize = 24;
+pub const SKY_N_PHI: usize = 48;
+/// Spectrum points (log-spaced).
+const SPECTRUM_POINTS: usize = 96;
+
+/// The waveform request evaluated without the sky integral (the figures never need it; the
+/// page runs that integral progressively), plus the validated system and observer direction.
+///
+/// # Errors
+/// The request's own validation errors.
+pub fn waveform_system(r: &WaveformRequest) -> Result<(GravityWaveformResult, Binary, (f64, f64)), InputError> {
+    let mut q = r.clone();
+    q.energy_flux = false;
+    let res = match q.evaluate()? {
+        WaveformResult::Gravity(g) => *g,
+        WaveformResult::Em(_) => {
+            return Err(InputError::Inconsistent {
+                field: "force",
+                reason: "figures are drawn for the gravitational waveform only; use the table or --csv for the electromagnetic field".into(),
+            })
+        }
+    };
+    let sys = Binary::new(res.m1_over_m, res.m2_over_m, res.gamma, res.b_over_m)?;
+    let au = r.angle_unit.unwrap_or(AngleUnit::Rad).radians();
+    Ok((res, sys, (r.theta * au, r.phi * au)))
+}
+
+/// Frame caption for figure titles.
+pub fn frame_caption(f: Frame) -> &'static str {
+    match f {
+        Frame::Rest2 => "rest frame of body 2",
+        Frame::Cm => "centre-of-mass frame",
+    }
+}
+
+/// Time axis and strain scale of a waveform result: seconds and the dimensionless strain at the
+/// observer when the result has physical values (and a distance), geometric units otherwise.
+struct Axes {
+    t: Vec<f64>,
+    t_label: &'static str,
+    /// Multiplies a geometric D·h/(GM/c²) into the plotted strain.
+    h_scale: f64,
+    h_label: &'static str,
+}
+
+fn waveform_axes(res: &GravityWaveformResult) -> Axes {
+    match &res.physical {
+        Some(p) => {
+            let (h_scale, h_label) = match p.distance_m {
+                Some(d) if d > 0.0 => (p.scales.mass_length_m / d, "strain h at the observer [dimensionless]"),
+                _ => (1.0, "D·h/(GM/c²) [dimensionless]"),
+            };
+            Axes { t: p.u_s.clone(), t_label: "retarded time u [s]", h_scale, h_label }
+        }
+        None => Axes { t: res.u.clone(), t_label: "retarded time u [GM/c³]", h_scale: 1.0, h_label: "D·h/(GM/c²) [dimensionless]" },
+    }
+}
+
+/// The spectrum's ω range: from 1/100 of v/b (the flat zero-frequency end) to 20 γ² v/b, past
+/// the Doppler-raised exponential fall-off (rule of thumb ω ~ v/b, waveform sheet §6; a plot
+/// range, not a result).
+fn spectrum_range(res: &GravityWaveformResult) -> (f64, f64) {
+    let w = res.v / res.b_over_m;
+    (1e-2 * w, 20.0 * res.gamma * res.gamma * w)
+}
+
+fn scale(v: &[f64], k: f64) -> Vec<f64> {
+    v.iter().map(|x| x * k).collect()
+}
+
+fn waveform_figure(r: &WaveformRequest, name: &str) -> Result<Figure, InputError> {
+    match name {
+        "strain" => {
+            let (res, _, _) = waveform_system(r)?;
+            let a = waveform_axes(&res);
+            let hp = scale(&res.h_plus, a.h_scale);
+            let hc = scale(&res.h_cross, a.h_scale);
+            let det = res.detector.as_ref().map(|d| scale(&d.h, a.h_scale));
+            Ok(figures_radiation::strain(&figures_radiation::StrainData {
+                t: &a.t,
+                t_label: a.t_label,
+                h_plus: &hp,
+                h_cross: &hc,
+                h_label: a.h_label,
+                memory: (res.memory.plus * a.h_scale, res.memory.cross * a.h_scale),
+                constant: (res.constant_piece.plus * a.h_scale, res.constant_piece.cross * a.h_scale),
+                detector: det.as_deref(),
+                frame: frame_caption(res.frame),
+            }))
+        }
+        "sky" | "sky_memory" => {
+            let (res, sys, obs) = waveform_system(r)?;
+            let (kind, q) = if name == "sky" {
+                (figures_radiation::SkyKind::Energy, SkyQuantity::EnergyPerSolidAngle)
+            } else {
+                (figures_radiation::SkyKind::Memory, SkyQuantity::Memory)
+            };
+            let map = sky_map(&sys, res.frame, q, SKY_N_THETA, SKY_N_PHI)?;
+            Ok(figures_radiation::sky(&figures_radiation::SkyData {
+                theta: &map.theta,
+                phi: &map.phi,
+                values: &map.values,
+                kind,
+                observer: Some(obs),
+                frame: frame_caption(res.frame),
+            }))
+        }
+        "spectrum" => {
+            let mut q = r.clone();
+            let (res0, _, _) = waveform_system(&{
+                let mut t = r.clone();
+                t.samples = 2;
+                t
+            })?;
+            let (omega_min, omega_max) = spectrum_range(&res0);
+            q.spectrum = Some(SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true });
+            q.samples = 2;
+            let (res, _, _) = waveform_system(&q)?;
+            let s = res.spectrum.ok_or(InputError::Inconsistent { field: "spectrum", reason: "no spectrum in the result".into() })?;
+            Ok(figures_radiation::spectrum(&figures_radiation::SpectrumData {
+                omega: &s.omega,
+                de_domega_dsolid: &s.de_domega_dsolid,
+                de_domega: s.de_domega.as_deref(),
+                zfl_direction: s.zfl_direction,
+                zfl_closed: s.zfl_closed,
+            }))
+        }
+        "slow_motion" => {
+            let mut q = r.clone();
+            q.quadrupole = true;
+            let (res, _, _) = waveform_system(&q)?;
+            let a = waveform_axes(&res);
+            let quad = res.quadrupole.as_ref().ok_or(InputError::Inconsistent { field: "quadrupole", reason: "no quadrupole waveform in the result".into() })?;
+            let (hp, hc) = (scale(&res.h_plus, a.h_scale), scale(&res.h_cross, a.h_scale));
+            let (qp, qc) = (scale(&quad.h_plus, a.h_scale), scale(&quad.h_cross, a.h_scale));
+            Ok(figures_radiation::slow_motion(&a.t, a.t_label, (&hp, &hc), (&qp, &qc), a.h_label))
+        }
+        _ => Err(unknown("waveform", name)),
+    }
 }

@@ -329,21 +329,48 @@ pub fn sky_map(
     let theta: Vec<f64> = (0..n_theta).map(|i| (i as f64 + 0.5) * pi / n_theta as f64).collect();
     let phi: Vec<f64> = (0..n_phi).map(|j| -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64).collect();
     let mut values = Vec::with_capacity(n_theta);
-    for &th in &theta {
-        let mut row = Vec::with_capacity(n_phi);
-        for &ph in &phi {
-            let w = DirectionWaveform::new(sys, frame, th, ph, DEFAULT_X_NODES)?;
-            row.push(match quantity {
-                SkyQuantity::EnergyPerSolidAngle => fluence(&w, 32),
-                SkyQuantity::Memory => {
-                    let m = w.memory();
-                    m[0].hypot(m[1])
-                }
-            });
-        }
-        values.push(row);
+    for i in 0..n_theta {
+        values.push(sky_map_row(sys, frame, quantity, n_theta, n_phi, i)?);
     }
     Ok(SkyMap { theta, phi, values })
+}
+
+/// Row `i` (θ = (i + ½)π/n_theta) of [`sky_map`]: the same values, one θ row at a time, so a
+/// page can fill a map progressively.
+///
+/// # Errors
+/// [`InputError`] naming `n_theta`/`n_phi` (1..=512) or `row` (< n_theta).
+pub fn sky_map_row(
+    sys: &Binary,
+    frame: Frame,
+    quantity: SkyQuantity,
+    n_theta: usize,
+    n_phi: usize,
+    i: usize,
+) -> Result<Vec<f64>, InputError> {
+    for (f, n) in [("n_theta", n_theta), ("n_phi", n_phi)] {
+        if !(1..=512).contains(&n) {
+            return Err(InputError::OutOfRange { field: f, value: n as f64, allowed: format!("1 ≤ {f} ≤ 512") });
+        }
+    }
+    if i >= n_theta {
+        return Err(InputError::OutOfRange { field: "row", value: i as f64, allowed: format!("row < n_theta = {n_theta}") });
+    }
+    let pi = std::f64::consts::PI;
+    let th = (i as f64 + 0.5) * pi / n_theta as f64;
+    let mut row = Vec::with_capacity(n_phi);
+    for j in 0..n_phi {
+        let ph = -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64;
+        let w = DirectionWaveform::new(sys, frame, th, ph, DEFAULT_X_NODES)?;
+        row.push(match quantity {
+            SkyQuantity::EnergyPerSolidAngle => fluence(&w, 32),
+            SkyQuantity::Memory => {
+                let m = w.memory();
+                m[0].hypot(m[1])
+            }
+        });
+    }
+    Ok(row)
 }
 
 impl SkyIntegrator {

@@ -53,7 +53,7 @@ mod request;
 mod spectrum;
 
 pub use energy::{
-    radiated_closed_form, sky_map, RadiatedClosed, SkyIntegrator, SkyMap, SkyOptions, SkyProgress,
+    radiated_closed_form, sky_map, sky_map_row, RadiatedClosed, SkyIntegrator, SkyMap, SkyOptions, SkyProgress,
     SkyQuantity,
 };
 pub use frames::{Binary, Frame};

@@ -1,0 +1,262 @@
+//! Radiation figures (waveform request): strain against time, the sky map, the spectrum and
+//! the slow-motion comparison. Built from plain arrays of the core's `WaveformResult` and
+//! `SkyMap`; no physics here.
+
+use crate::heatmap::Heat;
+use crate::{palette, Axis, Dash, Figure, LegendAt, Markers, Series, Style};
+
+fn line(label: impl Into<String>, xs: &[f64], ys: &[f64], style: Style) -> Series {
+    Series { label: label.into(), points: xs.iter().zip(ys).map(|(&x, &y)| Some((x, y))).collect(), style }
+}
+
+/// A horizontal line across `[x0, x1]`.
+fn level(label: impl Into<String>, x0: f64, x1: f64, y: f64, style: Style) -> Series {
+    Series { label: label.into(), points: vec![Some((x0, y)), Some((x1, y))], style }
+}
+
+/// A legend-only entry (a note; no points are drawn).
+fn note(label: impl Into<String>) -> Series {
+    Series { label: label.into(), points: Vec::new(), style: Style { color: [0xff, 0xff, 0xff], width: 1, dash: Dash::Solid, fill: None } }
+}
+
+/// Puts the legend in the corner with the fewest drawn points under it; if even that corner is
+/// crowded and the y axis is linear, widens the y range on that side so that the curves
+/// occupy the other two thirds of the plot and the legend covers nothing.
+fn place_legend(fig: &mut Figure) {
+    let ax = |v: f64, log: bool| if log { if v > 0.0 { v.log10() } else { f64::NAN } } else { v };
+    let pts: Vec<(f64, f64)> = fig
+        .series
+        .iter()
+        .flat_map(|s| s.points.iter().flatten().copied())
+        .map(|(x, y)| (ax(x, fig.x.log), ax(y, fig.y.log)))
+        .filter(|(x, y)| x.is_finite() && y.is_finite())
+        .collect();
+    let (x0, x1) = extent(&pts.iter().map(|p| p.0).collect::<Vec<_>>());
+    let (y0, y1) = extent(&pts.iter().map(|p| p.1).collect::<Vec<_>>());
+    if !(x1 > x0 && y1 > y0) {
+        return;
+    }
+    // The legend box is wide (long labels): count the outer 70 % × 40 % of each corner.
+    let count = |left: bool, top: bool| {
+        pts.iter()
+            .filter(|(x, y)| {
+                let fx = (x - x0) / (x1 - x0);
+                let fy = (y - y0) / (y1 - y0);
+                (if left { fx < 0.7 } else { fx > 0.3 }) && (if top { fy > 0.6 } else { fy < 0.4 })
+            })
+            .count()
+    };
+    let options = [
+        (LegendAt::TopRight, count(false, true)),
+        (LegendAt::TopLeft, count(true, true)),
+        (LegendAt::BottomRight, count(false, false)),
+        (LegendAt::BottomLeft, count(true, false)),
+    ];
+    let (at, n) = options.iter().min_by_key(|o| o.1).copied().unwrap_or((LegendAt::TopRight, 0));
+    fig.legend = at;
+    if n > 0 && !fig.y.log && fig.y.range.is_none() {
+        let span = (y1 - y0) / 0.62;
+        fig.y.range = Some(match at {
+            LegendAt::TopRight | LegendAt::TopLeft => (y0 - 0.04 * span, y0 + span),
+            _ => (y1 - span, y1 + 0.04 * span),
+        });
+    }
+}
+
+fn extent(xs: &[f64]) -> (f64, f64) {
+    let lo = xs.iter().copied().filter(|x| x.is_finite()).fold(f64::INFINITY, f64::min);
+    let hi = xs.iter().copied().filter(|x| x.is_finite()).fold(f64::NEG_INFINITY, f64::max);
+    (lo, hi)
+}
+
+fn g(v: f64) -> String {
+    if v == 0.0 {
+        "0".into()
+    } else if (1e-3..1e5).contains(&v.abs()) {
+        format!("{}", (v * 1e4).round() / 1e4)
+    } else {
+        format!("{v:.3e}")
+    }
+}
+
+/// Inputs of the strain figure.
+#[derive(Debug, Clone, PartialEq)]
+pub struct StrainData<'a> {
+    /// Time axis values (geometric u or seconds).
+    pub t: &'a [f64],
+    pub t_label: &'a str,
+    pub h_plus: &'a [f64],
+    pub h_cross: &'a [f64],
+    /// Axis label of the strain, with its unit.
+    pub h_label: &'a str,
+    /// Late-minus-early strain (same scale as h); the early value of the O(G²) strain is 0.
+    pub memory: (f64, f64),
+    /// The u-independent O(G) piece (same scale as h), noted in the legend, not plotted.
+    pub constant: (f64, f64),
+    /// Detector response F₊h₊ + F×h×, if asked.
+    pub detector: Option<&'a [f64]>,
+    /// Frame name for the title ("rest frame of body 2", "centre of mass").
+    pub frame: &'a str,
+}
+
+/// h₊ and h× against time, the memory levels (dotted) and a legend note with the constant O(G)
+/// piece, which is kept out of the curves (it is not Lorentz-covariant; waveform sheet §0).
+pub fn strain(d: &StrainData) -> Figure {
+    let mut fig = Figure::new(format!("Strain, {}", d.frame), Axis::linear(d.t_label), Axis::linear(d.h_label));
+    let (x0, x1) = extent(d.t);
+    fig.series.push(line("h₊", d.t, d.h_plus, Style::line(palette::TEAL, 2)));
+    fig.series.push(line("h×", d.t, d.h_cross, Style::line(palette::CORAL, 2)));
+    if let Some(h) = d.detector {
+        fig.series.push(line("detector F₊h₊ + F×h×", d.t, h, Style::dashed(palette::INDIGO, 2)));
+    }
+    if x0 < x1 {
+        fig.series.push(level(format!("memory Δh₊ = {}", g(d.memory.0)), x0, x1, d.memory.0, Style::dotted(palette::TEAL, 2)));
+        fig.series.push(level(format!("memory Δh× = {}", g(d.memory.1)), x0, x1, d.memory.1, Style::dotted(palette::CORAL, 2)));
+    }
+    fig.series.push(note(format!("not plotted: constant O(G) piece h₊ = {}, h× = {}", g(d.constant.0), g(d.constant.1))));
+    place_legend(&mut fig);
+    fig
+}
+
+/// What a sky map shows.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum SkyKind {
+    /// dE/dΩ, units of M (G = c = 1, D² absorbed).
+    Energy,
+    /// |D Δh| in units of GM/c².
+    Memory,
+}
+
+/// Inputs of the sky map.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SkyData<'a> {
+    /// Cell-centre polar angles θ (rad), evenly spaced over (0, π).
+    pub theta: &'a [f64],
+    /// Cell-centre azimuths φ (rad), evenly spaced over (−π, π).
+    pub phi: &'a [f64],
+    /// `values[i][j]` at (theta[i], phi[j]); NaN for cells not computed yet (left blank).
+    pub values: &'a [Vec<f64>],
+    pub kind: SkyKind,
+    /// The observer direction (θ, φ) in rad, marked.
+    pub observer: Option<(f64, f64)>,
+    pub frame: &'a str,
+}
+
+/// Cell edges from evenly spaced centres over [lo, hi].
+fn edges(n: usize, lo: f64, hi: f64) -> Vec<f64> {
+    (0..=n).map(|k| lo + (hi - lo) * k as f64 / n.max(1) as f64).collect()
+}
+
+/// Wraps an azimuth into (−180°, 180°].
+fn wrap_deg(phi: f64) -> f64 {
+    let mut p = phi.to_degrees() % 360.0;
+    if p > 180.0 {
+        p -= 360.0;
+    }
+    if p <= -180.0 {
+        p += 360.0;
+    }
+    p
+}
+
+/// The sky on a θ–φ rectangle (plate carrée: x = φ, y = 90° − θ, the elevation above the
+/// orbital plane, so the orbital normal θ = 0 is at the top), colour scale and colour bar; the
+/// observer direction marked.
+pub fn sky(d: &SkyData) -> Figure {
+    let (title, label, log) = match d.kind {
+        SkyKind::Energy => (format!("Energy per solid angle, {}", d.frame), "dE/dΩ [M]", true),
+        SkyKind::Memory => (format!("Memory over the sky, {}", d.frame), "|DΔh| [GM/c²]", false),
+    };
+    let mut fig = Figure::new(
+        title,
+        Axis { label: "azimuth φ [deg] (body 1 moves along φ = 0)".into(), log: false, range: Some((-180.0, 180.0)) },
+        Axis { label: "elevation 90° − θ [deg]".into(), log: false, range: Some((-90.0, 90.0)) },
+    );
+    let ye: Vec<f64> = edges(d.theta.len(), 90.0, -90.0);
+    fig.heat = Some(Heat {
+        x_edges: edges(d.phi.len(), -180.0, 180.0),
+        y_edges: ye,
+        values: d.values.to_vec(),
+        label: label.into(),
+        log,
+        decades: 4.0,
+    });
+    if let Some((th, ph)) = d.observer {
+        fig.markers.push(Markers {
+            label: "observer direction".into(),
+            points: vec![(wrap_deg(ph), 90.0 - th.to_degrees())],
+            error_bars: Vec::new(),
+            color: palette::TEAL,
+            radius: 6,
+        });
+    }
+    // The orbital plane θ = 90°.
+    fig.series.push(level("orbital plane", -180.0, 180.0, 0.0, Style::dashed(palette::SLATE, 1)));
+    fig.legend = LegendAt::BottomRight;
+    fig.width = 760;
+    fig.height = 440;
+    fig
+}
+
+/// Inputs of the spectrum figure.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SpectrumData<'a> {
+    pub omega: &'a [f64],
+    pub de_domega_dsolid: &'a [f64],
+    pub de_domega: Option<&'a [f64]>,
+    /// ω → 0 limit in the observer direction (from the memory).
+    pub zfl_direction: f64,
+    /// ω → 0 limit over the sphere (closed form).
+    pub zfl_closed: f64,
+}
+
+/// dE/(dω dΩ) and dE/dω against ω on log axes, with the zero-frequency limits marked as
+/// dotted levels and as points at the low-frequency edge.
+pub fn spectrum(d: &SpectrumData) -> Figure {
+    let mut fig = Figure::new(
+        "Spectrum",
+        Axis::log("angular frequency ω [c³/(GM)]"),
+        Axis::log("dE/(dω dΩ), dE/dω [M²] (E in Mc², ω in c³/GM)"),
+    );
+    let (x0, x1) = extent(d.omega);
+    fig.series.push(line("dE/(dω dΩ), observer direction", d.omega, d.de_domega_dsolid, Style::line(palette::TEAL, 2)));
+    if let Some(s) = d.de_domega {
+        fig.series.push(line("dE/dω, over the sphere", d.omega, s, Style::line(palette::INDIGO, 2)));
+    }
+    if x0 < x1 {
+        if d.zfl_direction > 0.0 {
+            fig.series.push(level("ω → 0 limit from the memory (direction)", x0, x1, d.zfl_direction, Style::dotted(palette::TEAL, 2)));
+        }
+        if d.de_domega.is_some() && d.zfl_closed > 0.0 {
+            fig.series.push(level("ω → 0 limit, closed form (sphere)", x0, x1, d.zfl_closed, Style::dotted(palette::INDIGO, 2)));
+        }
+    }
+    // Keep the plot from being dominated by the exponential tail: at most 8 decades below the top.
+    let top = d
+        .de_domega_dsolid
+        .iter()
+        .chain(d.de_domega.unwrap_or(&[]))
+        .chain([d.zfl_direction, d.zfl_closed].iter())
+        .copied()
+        .filter(|v| v.is_finite() && *v > 0.0)
+        .fold(0.0, f64::max);
+    if top > 0.0 && x0 > 0.0 && x0 < x1 {
+        fig.x.range = Some((x0, x1));
+        fig.y.range = Some((top * 1e-8, top * 3.0));
+    }
+    place_legend(&mut fig);
+    fig
+}
+
+/// The slow-motion comparison: the leading-order PM strain beside the quadrupole waveform of
+/// the Newtonian hyperbola, same time axis.
+pub fn slow_motion(t: &[f64], t_label: &str, pm: (&[f64], &[f64]), quad: (&[f64], &[f64]), h_label: &str) -> Figure {
+    let mut fig = Figure::new("Slow-motion check: PM strain and quadrupole hyperbola", Axis::linear(t_label), Axis::linear(h_label));
+    fig.series.push(line("h₊, leading-order PM", t, pm.0, Style::line(palette::TEAL, 2)));
+    fig.series.push(line("h₊, quadrupole hyperbola", t, quad.0, Style::dashed(palette::AMBER, 2)));
+    fig.series.push(line("h×, leading-order PM", t, pm.1, Style::line(palette::CORAL, 2)));
+    fig.series.push(line("h×, quadrupole hyperbola", t, quad.1, Style::dashed(palette::PLUM, 2)));
+    fig.series.push(note("agreement expected for v ≪ c only (differences O(v²))"));
+    place_legend(&mut fig);
+    fig
+}
