@@ -28,6 +28,8 @@ pub struct Parsed {
     pub figure: Option<String>,
     /// Angle unit of the figure's axis (`--plot-angle-unit`).
     pub plot_angle_unit: Option<String>,
+    /// Sky-map projection of the figure (`--projection cylindrical|equal_area`).
+    pub projection: Option<String>,
     /// Positional arguments after the command (e.g. a scenario file).
     pub positional: Vec<String>,
 }
@@ -70,6 +72,7 @@ pub fn parse(args: &[String]) -> Result<Parsed, String> {
         svg: None,
         figure: None,
         plot_angle_unit: None,
+        projection: None,
         positional: Vec::new(),
     };
     while let Some(a) = it.next() {
@@ -92,6 +95,10 @@ pub fn parse(args: &[String]) -> Result<Parsed, String> {
             "--plot-angle-unit" => match it.next() {
                 Some(f) => p.plot_angle_unit = Some(f.clone()),
                 None => return Err("--plot-angle-unit: missing unit (rad, deg, arcsec, mas, uas)".into()),
+            },
+            "--projection" => match it.next() {
+                Some(f) => p.projection = Some(f.clone()),
+                None => return Err("--projection: missing projection (cylindrical, equal_area)".into()),
             },
             opt if opt.starts_with("--") => {
                 let (name, inline) = match opt.split_once('=') {

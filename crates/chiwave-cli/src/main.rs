@@ -18,7 +18,7 @@ include!(concat!(env!("OUT_DIR"), "/scenarios.rs"));
 
 const HELP: &str = "chiwave — gravitational and electromagnetic scattering, on the command line
 
-usage: chiwave COMMAND [--option VALUE]... [--json | --csv] [--svg FILE [--figure NAME]]
+usage: chiwave COMMAND [--option VALUE]... [--json | --csv] [--svg FILE [--figure NAME] [--projection P]]
 
 commands
   light       deflection of light by a mass (exact, PM series, strong field, spin, charge, PPN)
@@ -47,7 +47,8 @@ fn command_help(cmd: &str) -> Option<&'static str> {
   geometric mode: masses and b bare (b in GM/c², M = m1 + m2); physical: 10Msun, 1000km/s, 1au.",
         "waveform" => "chiwave waveform --m1 M1 --m2 M2 (--gamma G | --v V) --b B --theta TH --phi PH
              [--frame rest2|cm] [--u-min U0 --u-max U1 --samples N] [--distance D]
-             [--force em --q1 Q1 --q2 Q2] [--json|--csv]",
+             [--force em --q1 Q1 --q2 Q2] [--json|--csv]
+             [--svg FILE --figure strain|sky|sky_memory|spectrum|slow_motion [--projection cylindrical|equal_area]]",
         "scenario" => "chiwave scenario NAME|FILE.json [--json|--csv]   (see `chiwave scenarios`)",
         _ => return None,
     })
@@ -145,7 +146,11 @@ fn write_svg(p: &Parsed, req: &Request, path: &str) -> Result<(), Failure> {
             .map(|s| s.to_string())
             .ok_or_else(|| input_failure(format!("--svg: no figure for `{kind}` yet")))?,
     };
-    let opts = scene::Options { angle_unit: p.plot_angle_unit.clone(), ..Default::default() };
+    let opts = scene::Options {
+        angle_unit: p.plot_angle_unit.clone(),
+        projection: p.projection.clone(),
+        ..Default::default()
+    };
     let fig = scene::figure(req, &name, &opts).map_err(|e| input_failure(with_option(p, e.field(), &e.to_string())))?;
     let (svg, _) = chiwave_plot::render(&fig).map_err(|e| Failure { message: format!("--svg: {e}"), status: 1 })?;
     std::fs::write(path, svg).map_err(|e| Failure { message: format!("--svg: cannot write {path}: {e}"), status: 1 })?;

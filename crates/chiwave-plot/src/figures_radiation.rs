@@ -3,6 +3,7 @@
 //! `SkyMap`; no physics here.
 
 use crate::heatmap::Heat;
+use chiwave_core::error::InputError;
 use crate::{palette, Axis, Dash, Figure, LegendAt, Markers, Series, Style};
 
 fn line(label: impl Into<String>, xs: &[f64], ys: &[f64], style: Style) -> Series {
@@ -127,6 +128,51 @@ pub enum SkyKind {
     Memory,
 }
 
+/// Map projection of a sky figure.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Projection {
+    /// Plate carrée: x = φ, y = 90° − θ (elevation above the orbital plane), both in degrees.
+    #[default]
+    Cylindrical,
+    /// Lambert cylindrical equal-area: x = φ, y = cos θ = sin(elevation), so equal areas of
+    /// the map are equal solid angles (Lambert 1772; common cartographic practice).
+    EqualArea,
+}
+
+impl Projection {
+    /// Reads `"cylindrical"` or `"equal_area"` (also `"equal-area"`).
+    ///
+    /// # Errors
+    /// [`InputError`] naming `field` with the allowed values.
+    pub fn parse(field: &'static str, s: &str) -> Result<Self, InputError> {
+        match s.trim() {
+            "cylindrical" => Ok(Projection::Cylindrical),
+            "equal_area" | "equal-area" => Ok(Projection::EqualArea),
+            other => Err(InputError::Inconsistent {
+                field,
+                reason: format!("unknown projection '{other}'; use cylindrical or equal_area"),
+            }),
+        }
+    }
+
+    /// Map y of a polar angle θ (rad).
+    fn y(self, theta: f64) -> f64 {
+        match self {
+            Projection::Cylindrical => 90.0 - theta.to_degrees(),
+            Projection::EqualArea => theta.cos(),
+        }
+    }
+
+    fn y_axis(self) -> Axis {
+        match self {
+            Projection::Cylindrical => Axis { label: "elevation 90° − θ [deg]".into(), log: false, range: Some((-90.0, 90.0)) },
+            Projection::EqualArea => {
+                Axis { label: "cos θ = sin(elevation) (equal-area)".into(), log: false, range: Some((-1.0, 1.0)) }
+            }
+        }
+    }
+}
+
 /// Inputs of the sky map.
 #[derive(Debug, Clone, PartialEq)]
 pub struct SkyData<'a> {
@@ -140,6 +186,7 @@ pub struct SkyData<'a> {
     /// The observer direction (θ, φ) in rad, marked.
     pub observer: Option<(f64, f64)>,
     pub frame: &'a str,
+    pub projection: Projection,
 }
 
 /// Cell edges from evenly spaced centres over [lo, hi].
@@ -159,9 +206,9 @@ fn wrap_deg(phi: f64) -> f64 {
     p
 }
 
-/// The sky on a θ–φ rectangle (plate carrée: x = φ, y = 90° − θ, the elevation above the
-/// orbital plane, so the orbital normal θ = 0 is at the top), colour scale and colour bar; the
-/// observer direction marked.
+/// The sky on a θ–φ rectangle in the chosen [`Projection`] (the orbital normal θ = 0 at the top,
+/// body 1's incoming direction φ = 0 in the middle), colour scale and colour bar; the observer
+/// direction marked.
 pub fn sky(d: &SkyData) -> Figure {
     let (title, label, log) = match d.kind {
         SkyKind::Energy => (format!("Energy per solid angle, {}", d.frame), "dE/dΩ [M]", true),
@@ -170,9 +217,10 @@ pub fn sky(d: &SkyData) -> Figure {
     let mut fig = Figure::new(
         title,
         Axis { label: "azimuth φ [deg] (body 1 moves along φ = 0)".into(), log: false, range: Some((-180.0, 180.0)) },
-        Axis { label: "elevation 90° − θ [deg]".into(), log: false, range: Some((-90.0, 90.0)) },
+        d.projection.y_axis(),
     );
-    let ye: Vec<f64> = edges(d.theta.len(), 90.0, -90.0);
+    let pi = std::f64::consts::PI;
+    let ye: Vec<f64> = edges(d.theta.len(), 0.0, pi).into_iter().map(|t| d.projection.y(t)).collect();
     fig.heat = Some(Heat {
         x_edges: edges(d.phi.len(), -180.0, 180.0),
         y_edges: ye,
@@ -184,7 +232,7 @@ pub fn sky(d: &SkyData) -> Figure {
     if let Some((th, ph)) = d.observer {
         fig.markers.push(Markers {
             label: "observer direction".into(),
-            points: vec![(wrap_deg(ph), 90.0 - th.to_degrees())],
+            points: vec![(wrap_deg(ph), d.projection.y(th))],
             error_bars: Vec::new(),
             color: palette::TEAL,
             radius: 6,
@@ -259,4 +307,106 @@ pub fn slow_motion(t: &[f64], t_label: &str, pm: (&[f64], &[f64]), quad: (&[f64]
     fig.series.push(note("agreement expected for v ≪ c only (differences O(v²))"));
     place_legend(&mut fig);
     fig
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::scene;
+    use chiwave_core::request::Request;
+
+    fn waveform_request() -> Request {
+        serde_json::from_str(
+            r#"{"kind": "waveform", "m1": 1, "m2": 1, "gamma": 1.3, "b": 60, "theta": 0.9, "phi": 0.5,
+                "u_min": -600, "u_max": 600, "samples": 301}"#,
+        )
+        .unwrap()
+    }
+
+    fn labels(f: &Figure) -> Vec<&str> {
+        f.series.iter().map(|s| s.label.as_str()).collect()
+    }
+
+    #[test]
+    fn strain_figure_shows_both_polarisations_and_the_memory() {
+        let f = scene::figure(&waveform_request(), "strain", &scene::Options::default()).unwrap();
+        let l = labels(&f);
+        assert!(l[..2] == ["h₊", "h×"], "{l:?}");
+        assert!(l.iter().any(|s| s.starts_with("memory Δh₊")) && l.iter().any(|s| s.starts_with("memory Δh×")));
+        assert!(l.iter().any(|s| s.starts_with("not plotted: constant O(G) piece")));
+        // The memory level equals the late value of the curve (the O(G²) strain starts at 0
+        // early; at u = 600 ≈ 10 b the residual is small): same number, drawn from the result.
+        let hp = &f.series[0].points;
+        let mem = f.series.iter().find(|s| s.label.starts_with("memory Δh₊")).unwrap().points[0].unwrap().1;
+        let late = hp.last().unwrap().unwrap().1;
+        assert!((late - mem).abs() < 0.05 * mem.abs().max(1e-30), "late {late} vs memory {mem}");
+        let (svg, _) = crate::render(&f).unwrap();
+        assert!(svg.contains("Strain, rest frame of body 2"));
+    }
+
+    #[test]
+    fn equal_area_rows_are_equal_solid_angles() {
+        let req = waveform_request();
+        for (p, top, bottom) in [("cylindrical", 90.0, -90.0), ("equal_area", 1.0, -1.0)] {
+            let opts = scene::Options { projection: Some(p.into()), ..Default::default() };
+            let f = scene::figure(&req, "sky_memory", &opts).unwrap();
+            let heat = f.heat.as_ref().unwrap();
+            let ye = &heat.y_edges;
+            assert_eq!(ye.len(), scene::SKY_N_THETA + 1);
+            assert!((ye[0] - top).abs() < 1e-12 && (ye[ye.len() - 1] - bottom).abs() < 1e-12);
+            // Row i covers θ ∈ [iπ/n, (i+1)π/n]; its solid angle per unit azimuth is
+            // cos θ_i − cos θ_{i+1} (elementary spherical geometry, common practice).
+            let n = scene::SKY_N_THETA as f64;
+            for i in 0..scene::SKY_N_THETA {
+                let (t0, t1) = (i as f64 * std::f64::consts::PI / n, (i + 1) as f64 * std::f64::consts::PI / n);
+                let h = ye[i] - ye[i + 1];
+                if p == "equal_area" {
+                    assert!((h - (t0.cos() - t1.cos())).abs() < 1e-12, "row {i}");
+                } else {
+                    assert!((h - 180.0 / n).abs() < 1e-9, "row {i}");
+                }
+            }
+            // The observer marker sits at the request's direction in the projection.
+            let m = &f.markers[0].points[0];
+            let want = if p == "equal_area" { 0.9f64.cos() } else { 90.0 - 0.9f64.to_degrees() };
+            assert!((m.0 - 0.5f64.to_degrees()).abs() < 1e-9 && (m.1 - want).abs() < 1e-9);
+        }
+        let bad = scene::Options { projection: Some("mercator".into()), ..Default::default() };
+        assert_eq!(scene::figure(&req, "sky", &bad).unwrap_err().field(), "projection");
+    }
+
+    #[test]
+    fn spectrum_figure_has_both_curves_and_limits_on_log_axes() {
+        let f = scene::figure(&waveform_request(), "spectrum", &scene::Options::default()).unwrap();
+        assert!(f.x.log && f.y.log);
+        let l = labels(&f);
+        for want in ["dE/(dω dΩ), observer direction", "dE/dω, over the sphere", "ω → 0 limit from the memory (direction)", "ω → 0 limit, closed form (sphere)"] {
+            assert!(l.contains(&want), "{want} missing from {l:?}");
+        }
+        // The low-frequency end of the direction spectrum approaches its memory limit (Smarr
+        // 1977 ZFL; the first ω is 1/100 of v/b, so within a few per cent).
+        let first = f.series[0].points[0].unwrap().1;
+        let zfl = f.series.iter().find(|s| s.label.starts_with("ω → 0 limit from the memory")).unwrap().points[0].unwrap().1;
+        assert!((first / zfl - 1.0).abs() < 0.05, "{first} vs {zfl}");
+    }
+
+    #[test]
+    fn slow_motion_figure_pairs_pm_and_quadrupole() {
+        let f = scene::figure(&waveform_request(), "slow_motion", &scene::Options::default()).unwrap();
+        let l = labels(&f);
+        assert_eq!(&l[..4], ["h₊, leading-order PM", "h₊, quadrupole hyperbola", "h×, leading-order PM", "h×, quadrupole hyperbola"]);
+        assert_eq!(f.series[0].points.len(), f.series[1].points.len());
+    }
+
+    #[test]
+    fn em_requests_get_a_named_error() {
+        let req: Request = serde_json::from_str(
+            r#"{"kind": "waveform", "force": "em", "q1": 0.1, "q2": -0.1, "m1": 1, "m2": 1, "gamma": 1.3, "b": 60,
+                "theta": 0.9, "phi": 0.5, "u_min": -600, "u_max": 600}"#,
+        )
+        .unwrap();
+        for name in ["strain", "sky", "spectrum"] {
+            assert_eq!(scene::figure(&req, name, &scene::Options::default()).unwrap_err().field(), "force");
+        }
+    }
 }

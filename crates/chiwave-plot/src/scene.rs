@@ -18,6 +18,8 @@ pub struct Options {
     pub angle_unit: Option<String>,
     pub width: Option<u32>,
     pub height: Option<u32>,
+    /// Sky-map projection: "cylindrical" (default) or "equal_area".
+    pub projection: Option<String>,
 }
 
 impl Options {
@@ -25,6 +27,17 @@ impl Options {
         match &self.angle_unit {
             None => Ok(AngleUnit::Rad),
             Some(s) => AngleUnit::parse("angle_unit", s),
+        }
+    }
+
+    /// The sky-map projection.
+    ///
+    /// # Errors
+    /// [`InputError`] naming `projection`.
+    pub fn projection(&self) -> Result<figures_radiation::Projection, InputError> {
+        match &self.projection {
+            None => Ok(figures_radiation::Projection::default()),
+            Some(s) => figures_radiation::Projection::parse("projection", s),
         }
     }
 }
@@ -195,7 +208,7 @@ pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Figure, Input
         Request::Light(r) => light_figure(r, name, opts),
         Request::Lens(r) => lens_figure(r, name),
         Request::Encounter(r) => encounter_figure(r, name, opts),
-        Request::Waveform(r) => waveform_figure(r, name),
+        Request::Waveform(r) => waveform_figure(r, name, opts),
         // Kinds without figures yet: say which kind, so the page can show it next to the plot.
         #[allow(unreachable_patterns)]
         other => Err(unknown(kind_of(other), name)),
@@ -265,16 +278,26 @@ fn waveform_axes(res: &GravityWaveformResult) -> Axes {
 /// The spectrum's ω range: from 1/100 of v/b (the flat zero-frequency end) to 20 γ² v/b, past
 /// the Doppler-raised exponential fall-off (rule of thumb ω ~ v/b, waveform sheet §6; a plot
 /// range, not a result).
-fn spectrum_range(res: &GravityWaveformResult) -> (f64, f64) {
-    let w = res.v / res.b_over_m;
-    (1e-2 * w, 20.0 * res.gamma * res.gamma * w)
+pub fn spectrum_range(sys: &Binary) -> (f64, f64) {
+    let w = sys.v() / sys.b;
+    (1e-2 * w, 20.0 * sys.gamma * sys.gamma * w)
+}
+
+/// The spectrum figure's ω grid for a system (`SPECTRUM_POINTS` log-spaced values over
+/// [`spectrum_range`]).
+///
+/// # Errors
+/// Never for a valid system (the range is positive and ordered).
+pub fn spectrum_omegas(sys: &Binary) -> Result<Vec<f64>, InputError> {
+    let (omega_min, omega_max) = spectrum_range(sys);
+    SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: false }.omegas()
 }
 
 fn scale(v: &[f64], k: f64) -> Vec<f64> {
     v.iter().map(|x| x * k).collect()
 }
 
-fn waveform_figure(r: &WaveformRequest, name: &str) -> Result<Figure, InputError> {
+fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Figure, InputError> {
     match name {
         "strain" => {
             let (res, _, _) = waveform_system(r)?;
@@ -295,6 +318,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str) -> Result<Figure, InputError
             }))
         }
         "sky" | "sky_memory" => {
+            let projection = opts.projection()?;
             let (res, sys, obs) = waveform_system(r)?;
             let (kind, q) = if name == "sky" {
                 (figures_radiation::SkyKind::Energy, SkyQuantity::EnergyPerSolidAngle)
@@ -309,16 +333,13 @@ fn waveform_figure(r: &WaveformRequest, name: &str) -> Result<Figure, InputError
                 kind,
                 observer: Some(obs),
                 frame: frame_caption(res.frame),
+                projection,
             }))
         }
         "spectrum" => {
             let mut q = r.clone();
-            let (res0, _, _) = waveform_system(&{
-                let mut t = r.clone();
-                t.samples = 2;
-                t
-            })?;
-            let (omega_min, omega_max) = spectrum_range(&res0);
+            let (sys, _, _) = r.gravity_system()?;
+            let (omega_min, omega_max) = spectrum_range(&sys);
             q.spectrum = Some(SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true });
             q.samples = 2;
             let (res, _, _) = waveform_system(&q)?;

@@ -14,7 +14,9 @@ use chiwave_plot::scene;
 use wasm_bindgen::prelude::*;
 
 mod encounter;
+mod radiation;
 pub use encounter::encounter_nr;
+pub use radiation::RadiationJob;
 
 
 /// A JS `Error` with `field` and `kind` properties.
@@ -49,7 +51,7 @@ pub(crate) fn to_js<T: Serialize + ?Sized>(v: &T) -> Result<JsValue, js_sys::Err
     v.serialize(&ser).map_err(|e| js_error("request", "result", &format!("result: {e}")))
 }
 
-fn read_request(request: JsValue) -> Result<Request, js_sys::Error> {
+pub(crate) fn read_request(request: JsValue) -> Result<Request, js_sys::Error> {
     serde_wasm_bindgen::from_value(request).map_err(|e| request_error("request", e))
 }
 

@@ -48,6 +48,7 @@ mod frames;
 mod kernel;
 mod memory;
 mod observer;
+mod progressive;
 mod quadrupole;
 mod request;
 mod spectrum;
@@ -60,10 +61,11 @@ pub use frames::{Binary, Frame};
 pub use kernel::{constant_piece, waveform, DirectionWaveform, Strain, DEFAULT_X_NODES};
 pub use memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 pub use observer::{antenna_pattern, characteristic_frequency, strain_unit, PhysicalScales};
+pub use progressive::{JobSpectrum, RadiationJob, RadiationPhase, RadiationSnapshot};
 pub use quadrupole::quadrupole_hyperbola;
 pub use request::{
     DetectorOptions, DetectorResult, EmPhysicalResult, EmSpectrumResult, EmWaveformResult, GravityWaveformResult,
     MemoryPair, PhysicalResult, QuadrupoleResult, SpectrumOptions, SpectrumResult, ThetaPhi, WaveformForce,
-    WaveformRequest, WaveformResult,
+    WaveformRequest, WaveformResult, SPECTRUM_SKY,
 };
-pub use spectrum::{spectrum_angle_integrated, zfl_from_memory};
+pub use spectrum::{spectrum_angle_integrated, zfl_from_memory, SkySpectrum};

@@ -190,6 +190,8 @@ pub struct PhysicalResult {
     /// max over the samples of sqrt(h₊² + h×²) (needs `distance`).
     pub peak_strain: Option<f64>,
     pub memory_strain: Option<MemoryPair>,
+    /// M c² in joules (M = m1 + m2): multiplies every geometric energy E/(M c²).
+    pub mc2_j: f64,
     /// Radiated energy (closed form) in joules and in M☉c².
     pub e_rad_j: f64,
     pub e_rad_msun_c2: f64,
@@ -509,6 +511,25 @@ impl WaveformRequest {
         }
     }
 
+    /// The validated gravitational system in units of M (m1 + m2 = 1), the observer direction
+    /// (θ, φ) in radians and M c² in joules when the masses are physical: what a progressive
+    /// sky computation ([`super::RadiationJob`]) needs, without evaluating the waveform.
+    ///
+    /// # Errors
+    /// The request's own validation errors; `force` for an electromagnetic request.
+    pub fn gravity_system(&self) -> Result<(Binary, (f64, f64), Option<f64>), InputError> {
+        if self.force != WaveformForce::Gravity {
+            return Err(InputError::Inconsistent {
+                field: "force",
+                reason: "the sky integrals here are for the gravitational waveform; the em result reports e_rad_flux directly".into(),
+            });
+        }
+        let c = self.common()?;
+        let sys = Binary::new(c.ms.m1 / c.mtot, c.ms.m2 / c.mtot, c.gamma, c.b_over_m)?;
+        let mc2_j = c.l_tot.map(mc2_joules);
+        Ok((sys, (c.theta, c.phi), mc2_j))
+    }
+
     fn common(&self) -> Result<Common, InputError> {
         let ms = read_masses(self)?;
         let mtot = ms.m1 + ms.m2;
@@ -667,7 +688,7 @@ impl WaveformRequest {
                     (Some(a), Some(c)) => Some(a.iter().zip(c).map(|(x, y)| x.hypot(*y)).fold(0.0, f64::max)),
                     _ => None,
                 };
-                let mc2 = l * crate::units::codata2018::C.powi(4) / crate::units::codata2018::G;
+                let mc2 = mc2_joules(l);
                 let e_j = closed.energy * mc2;
                 let msun_c2 = crate::units::M_SUN_KG * crate::units::codata2018::C.powi(2);
                 Some(PhysicalResult {
@@ -680,6 +701,7 @@ impl WaveformRequest {
                         (Some(a), Some(c)) => Some(MemoryPair { plus: a, cross: c }),
                         _ => None,
                     },
+                    mc2_j: mc2,
                     e_rad_j: e_j,
                     e_rad_msun_c2: e_j / msun_c2,
                     distance_m,
@@ -811,7 +833,7 @@ impl WaveformRequest {
         }
         let physical = c.l_tot.map(|l| {
             let cc = crate::units::codata2018::C;
-            let mc2 = l * cc.powi(4) / crate::units::codata2018::G;
+            let mc2 = mc2_joules(l);
             EmPhysicalResult {
                 total_mass_kg: l * cc * cc / crate::units::codata2018::G,
                 u_s: c.u.iter().map(|x| x * l / cc).collect(),
@@ -853,6 +875,11 @@ impl WaveformRequest {
 }
 
 /// The validity flag on b for the gravitational LO waveform (thresholds at [`B_INVALID`], [`B_CAUTION`]).
+/// M c² in joules from G M/c² in metres: (GM/c²) c⁴/G (CODATA 2018 G and c).
+fn mc2_joules(mass_length_m: f64) -> f64 {
+    mass_length_m * crate::units::codata2018::C.powi(4) / crate::units::codata2018::G
+}
+
 fn b_flag(b_over_m: f64) -> Flag {
     let (level, msg) = if b_over_m < B_INVALID {
         (
@@ -868,6 +895,16 @@ fn b_flag(b_over_m: f64) -> Flag {
         (Level::Ok, "b ≫ GM/c²: the weak-deflection expansion of the waveform applies")
     };
     Flag::new("b_weak_field", level, Some(b_over_m), msg)
+}
+
+impl SpectrumOptions {
+    /// The log-spaced ω grid (`points` values from `omega_min` to `omega_max`, both included).
+    ///
+    /// # Errors
+    /// [`InputError`] naming `spectrum.omega_min`, `spectrum.omega_max` or `spectrum.points`.
+    pub fn omegas(&self) -> Result<Vec<f64>, InputError> {
+        omega_grid(self)
+    }
 }
 
 /// Log-spaced ω grid of the spectrum options, validated.
@@ -892,12 +929,15 @@ fn omega_grid(o: &SpectrumOptions) -> Result<Vec<f64>, InputError> {
     Ok((0..o.points).map(|i| o.omega_min * (r * i as f64 / (o.points - 1) as f64).exp()).collect())
 }
 
+/// Sky rule of the angle-integrated spectrum dE/dω (a plot quantity: coarser than the energy
+/// balance's rule; tested against the memory ZFL closed form at ω → 0 in tests/waveform.rs).
+pub const SPECTRUM_SKY: SkyOptions = SkyOptions { n_polar: 12, n_azimuth: 16, n_u: 24, n_x: 24 };
+
 fn spectrum_result(sys: &Binary, frame: Frame, w: &DirectionWaveform, o: &SpectrumOptions) -> Result<SpectrumResult, InputError> {
     let omega = omega_grid(o)?;
     let de: Vec<f64> = omega.iter().map(|&x| w.spectrum(x)).collect();
     let de_int = if o.angle_integrated {
-        let opts = SkyOptions { n_polar: 12, n_azimuth: 16, n_u: 24, n_x: 24 };
-        Some(spectrum_angle_integrated(sys, frame, &omega, opts)?)
+        Some(spectrum_angle_integrated(sys, frame, &omega, SPECTRUM_SKY)?)
     } else {
         None
     };

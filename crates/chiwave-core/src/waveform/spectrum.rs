@@ -99,21 +99,109 @@ pub fn spectrum_angle_integrated(
     omega: &[f64],
     opts: SkyOptions,
 ) -> Result<Vec<f64>, InputError> {
-    for &w in omega {
-        crate::error::finite("omega", w)?;
-        if w < 0.0 {
-            return Err(InputError::OutOfRange { field: "omega", value: w, allowed: "omega ≥ 0".into() });
+    let mut it = SkySpectrum::new(sys, frame, omega, opts)?;
+    it.run()?;
+    Ok(it.values().to_vec())
+}
+
+/// dE/dω over the sphere, accumulated a few sky cells at a time (so a page can advance it
+/// between frames); the same sum as [`spectrum_angle_integrated`].
+///
+/// # Formula
+/// dE/dω = Σ_cells w_cell dE/(dω dΩ)(n_cell) on the sky rule of [`SkyIntegrator`] (sheet §1).
+///
+/// # Examples
+/// ```
+/// use chiwave_core::waveform::{Binary, Frame, SkyOptions, SkySpectrum};
+/// let s = Binary::new(0.5, 0.5, 1.2, 1.0).unwrap();
+/// let opts = SkyOptions { n_polar: 6, n_azimuth: 8, n_u: 16, n_x: 16 };
+/// let mut it = SkySpectrum::new(&s, Frame::Cm, &[0.01, 0.1], opts).unwrap();
+/// assert!(it.step(4).unwrap() < 1.0);
+/// it.run().unwrap();
+/// assert!(it.values()[0] > it.values()[1]);
+/// ```
+#[derive(Debug, Clone)]
+pub struct SkySpectrum {
+    sys: Binary,
+    frame: Frame,
+    n_x: usize,
+    omega: Vec<f64>,
+    cells: Vec<(f64, f64, f64, [f64; 3])>,
+    next: usize,
+    values: Vec<f64>,
+}
+
+impl SkySpectrum {
+    /// Sets up the sum on the sky cells of `opts`.
+    ///
+    /// # Errors
+    /// [`InputError`] naming `omega` (each finite, ≥ 0) or a sky option.
+    pub fn new(sys: &Binary, frame: Frame, omega: &[f64], opts: SkyOptions) -> Result<Self, InputError> {
+        for &w in omega {
+            crate::error::finite("omega", w)?;
+            if w < 0.0 {
+                return Err(InputError::OutOfRange { field: "omega", value: w, allowed: "omega ≥ 0".into() });
+            }
+        }
+        let sky = SkyIntegrator::new(sys, frame, opts)?;
+        Ok(SkySpectrum {
+            sys: *sys,
+            frame,
+            n_x: opts.n_x,
+            omega: omega.to_vec(),
+            cells: sky.cell_list().to_vec(),
+            next: 0,
+            values: vec![0.0; omega.len()],
+        })
+    }
+
+    /// Adds up to `max_cells` more sky cells; returns the fraction of cells done.
+    ///
+    /// # Errors
+    /// [`InputError`] from a direction (cannot happen for cells built from unit vectors).
+    pub fn step(&mut self, max_cells: usize) -> Result<f64, InputError> {
+        let end = self.next.saturating_add(max_cells).min(self.cells.len());
+        for &(th, ph, wt, _) in &self.cells[self.next..end] {
+            let w = DirectionWaveform::new(&self.sys, self.frame, th, ph, self.n_x)?;
+            for (o, &om) in self.values.iter_mut().zip(&self.omega) {
+                *o += wt * w.spectrum(om);
+            }
+        }
+        self.next = end;
+        Ok(self.fraction())
+    }
+
+    /// Runs to the end.
+    ///
+    /// # Errors
+    /// As [`SkySpectrum::step`].
+    pub fn run(&mut self) -> Result<(), InputError> {
+        self.step(usize::MAX).map(|_| ())
+    }
+
+    /// Fraction of the sky cells done, in [0, 1].
+    pub fn fraction(&self) -> f64 {
+        if self.cells.is_empty() {
+            1.0
+        } else {
+            self.next as f64 / self.cells.len() as f64
         }
     }
-    let sky = SkyIntegrator::new(sys, frame, opts)?;
-    let mut out = vec![0.0; omega.len()];
-    for &(th, ph, wt, _) in sky.cell_list() {
-        let w = DirectionWaveform::new(sys, frame, th, ph, opts.n_x)?;
-        for (o, &om) in out.iter_mut().zip(omega) {
-            *o += wt * w.spectrum(om);
-        }
+
+    /// True when every cell is done.
+    pub fn done(&self) -> bool {
+        self.next >= self.cells.len()
     }
-    Ok(out)
+
+    /// The angular frequencies.
+    pub fn omega(&self) -> &[f64] {
+        &self.omega
+    }
+
+    /// dE/dω so far (the full sum once [`SkySpectrum::done`]).
+    pub fn values(&self) -> &[f64] {
+        &self.values
+    }
 }
 
 /// The zero-frequency limit dE/dω(0) over the sphere from the Braginsky–Thorne memory

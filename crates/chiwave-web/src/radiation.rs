@@ -1,0 +1,122 @@
+//! The radiation view's progressive sky work: a handle on the core's
+//! [`chiwave_core::waveform::RadiationJob`] (energy balance, sky map, dE/dω over the sphere) that
+//! the page advances for a few milliseconds per animation frame, and the two figures drawn from
+//! its partial state. No physics here: the sums are the core's, the figures the plot crate's.
+
+use crate::{input_error, js_error, to_js};
+use chiwave_core::request::Request;
+use chiwave_core::waveform::{self, SkyQuantity};
+use chiwave_plot::figures_radiation::{self, Projection, SkyKind};
+use chiwave_plot::scene::{self, SKY_N_PHI, SKY_N_THETA};
+use wasm_bindgen::prelude::*;
+
+/// Progressive sky integrals of one gravitational waveform request.
+#[wasm_bindgen]
+pub struct RadiationJob {
+    inner: waveform::RadiationJob,
+    projection: Projection,
+}
+
+#[wasm_bindgen]
+impl RadiationJob {
+    /// Starts the sky work for a waveform request: `map` is `"energy"` (dE/dΩ) or `"memory"`
+    /// (|DΔh|), `projection` is `"cylindrical"` or `"equal_area"`.
+    ///
+    /// # Errors
+    /// A JS `Error` naming the field: the request's own fields (`force` for em), `map`, or
+    /// `projection`.
+    #[wasm_bindgen(constructor)]
+    pub fn new(request: JsValue, map: &str, projection: &str) -> Result<RadiationJob, js_sys::Error> {
+        let req = match crate::read_request(request)? {
+            Request::Waveform(r) => r,
+            _ => return Err(js_error("request", "kind", "kind: RadiationJob needs a request of kind 'waveform'")),
+        };
+        let quantity = match map {
+            "energy" => SkyQuantity::EnergyPerSolidAngle,
+            "memory" => SkyQuantity::Memory,
+            other => {
+                return Err(js_error("input", "map", &format!("map: unknown sky quantity '{other}'; use energy or memory")))
+            }
+        };
+        let projection = Projection::parse("projection", projection).map_err(|e| input_error(&e))?;
+        let (sys, _, _) = req.gravity_system().map_err(|e| input_error(&e))?;
+        let omega = scene::spectrum_omegas(&sys).map_err(|e| input_error(&e))?;
+        let inner = waveform::RadiationJob::new(&req, quantity, SKY_N_THETA, SKY_N_PHI, &omega)
+            .map_err(|e| input_error(&e))?;
+        Ok(RadiationJob { inner, projection })
+    }
+
+    /// Works for about `budget_ms` milliseconds (in chunks of a few directions, so a step
+    /// overruns by at most one chunk) and returns the snapshot
+    /// (`chiwave_core::waveform::RadiationSnapshot` as a JS object).
+    ///
+    /// # Errors
+    /// A JS `Error` from a direction (not expected).
+    pub fn step(&mut self, budget_ms: f64) -> Result<JsValue, js_sys::Error> {
+        let t0 = js_sys::Date::now();
+        let budget = if budget_ms.is_finite() { budget_ms.clamp(0.0, 1000.0) } else { 8.0 };
+        let mut snap = self.inner.snapshot();
+        while !snap.done {
+            snap = self.inner.step(4).map_err(|e| input_error(&e))?;
+            if js_sys::Date::now() - t0 >= budget {
+                break;
+            }
+        }
+        to_js(&snap)
+    }
+
+    /// The snapshot without more work.
+    ///
+    /// # Errors
+    /// Only if the snapshot cannot be converted (not expected).
+    pub fn snapshot(&self) -> Result<JsValue, js_sys::Error> {
+        to_js(&self.inner.snapshot())
+    }
+
+    /// True when every phase is done.
+    pub fn done(&self) -> bool {
+        self.inner.snapshot().done
+    }
+
+    /// The sky map as far as it is computed (blank rows not yet done), rendered
+    /// (`{svg, frame, series}`).
+    ///
+    /// # Errors
+    /// A JS `Error` with `kind = "plot"` for a drawing failure.
+    pub fn sky_figure(&self) -> Result<JsValue, js_sys::Error> {
+        let map = self.inner.sky_map();
+        let kind = match self.inner.quantity() {
+            SkyQuantity::EnergyPerSolidAngle => SkyKind::Energy,
+            SkyQuantity::Memory => SkyKind::Memory,
+        };
+        let fig = figures_radiation::sky(&figures_radiation::SkyData {
+            theta: &map.theta,
+            phi: &map.phi,
+            values: &map.values,
+            kind,
+            observer: Some(self.inner.observer()),
+            frame: scene::frame_caption(self.inner.frame()),
+            projection: self.projection,
+        });
+        let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
+        to_js(&r)
+    }
+
+    /// The spectrum figure: dE/(dω dΩ) at the observer at once, dE/dω over the sphere when its
+    /// phase is done, both ω → 0 limits (`{svg, frame, series}`).
+    ///
+    /// # Errors
+    /// A JS `Error` with `kind = "plot"` for a drawing failure.
+    pub fn spectrum_figure(&self) -> Result<JsValue, js_sys::Error> {
+        let s = self.inner.spectrum();
+        let fig = figures_radiation::spectrum(&figures_radiation::SpectrumData {
+            omega: s.omega,
+            de_domega_dsolid: s.de_domega_dsolid,
+            de_domega: s.de_domega,
+            zfl_direction: s.zfl_direction,
+            zfl_closed: s.zfl_closed,
+        });
+        let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
+        to_js(&r)
+    }
+}
