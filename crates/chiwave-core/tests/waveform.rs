@@ -331,6 +331,27 @@ fn request_contract() {
     assert!(chiwave_core::request::evaluate(&req).is_ok());
 }
 
+/// The time window in units of b/v or in seconds maps onto the same u grid (GM/c³).
+#[test]
+fn window_units() {
+    let base = r#""m1":"10Msun","m2":"5Msun","v":"2000km/s","b":"0.5au","theta":1.0,"phi":0.5,"samples":3,"energy_flux":false"#;
+    let r = request(&format!(r#"{{{base},"u_min":-10,"u_max":10,"u_unit":"b_over_v"}}"#)).unwrap();
+    // b/v in GM/c³ is (b/(GM/c²))/(v/c) (definition).
+    let b_over_v = r.b_over_m / r.v;
+    assert!(rel_diff(r.u[0], -10.0 * b_over_v) < 1e-12, "{} vs {}", r.u[0], -10.0 * b_over_v);
+    assert!(r.u[1].abs() < 1e-9 * b_over_v);
+    let p = r.physical.as_ref().unwrap();
+    // In seconds: b/v = 0.5 au / 2000 km/s (IAU 2012 au = 149 597 870 700 m).
+    let bv_s = 0.5 * 149_597_870_700.0 / 2.0e6;
+    assert!(rel_diff(p.u_s[2], 10.0 * bv_s) < 1e-12, "{} vs {}", p.u_s[2], 10.0 * bv_s);
+    let s = request(&format!(r#"{{{base},"u_min":-3600,"u_max":3600,"u_unit":"s"}}"#)).unwrap();
+    assert!(rel_diff(s.physical.as_ref().unwrap().u_s[0], -3600.0) < 1e-12);
+    let e = request(r#"{"m1":1,"m2":1,"gamma":1.2,"b":30,"theta":1,"phi":0,"u_min":-1,"u_max":1,"u_unit":"s"}"#).unwrap_err();
+    assert_eq!(e.field(), "u_unit");
+    let e = request(r#"{"m1":1,"m2":1,"gamma":1.0,"b":30,"theta":1,"phi":0,"u_min":-1,"u_max":1,"u_unit":"b_over_v"}"#).unwrap_err();
+    assert_eq!(e.field(), "gamma");
+}
+
 /// Bad input gives an InputError naming the field, never a panic.
 #[test]
 fn request_validation() {
@@ -389,7 +410,7 @@ mod no_panic {
             let r = WaveformRequest {
                 force: WaveformForce::Gravity, m1: Some(0.3.into()), m2: Some(0.7.into()), nu: None, total_mass: None,
                 gamma: Some(g), v: None, b: b.into(), theta: th, phi: ph, angle_unit: None, frame: Frame::Cm,
-                u_min: u0, u_max: u1, samples: 3, distance: None, q1: None, q2: None, detector: None,
+                u_min: u0, u_max: u1, u_unit: Default::default(), samples: 3, distance: None, q1: None, q2: None, detector: None,
                 spectrum: None, energy_flux: false, quadrupole: true,
             };
             if let Ok(res) = r.evaluate() {

@@ -309,6 +309,21 @@ pub fn slow_motion(t: &[f64], t_label: &str, pm: (&[f64], &[f64]), quad: (&[f64]
     fig
 }
 
+/// The electromagnetic radiation field D·E along e_θ and e_φ against time, with the memory
+/// ∫du D·E = −DΔA⊥ noted in the legend (it is a time integral, not a level of the curves).
+pub fn em_field(t: &[f64], t_label: &str, e_theta: &[f64], e_phi: &[f64], memory: (f64, f64)) -> Figure {
+    let mut fig = Figure::new(
+        "Radiation field, rest frame of body 2",
+        Axis::linear(t_label),
+        Axis::linear("D·E [c²/√G] (charges in √G M)"),
+    );
+    fig.series.push(line("D·E_θ", t, e_theta, Style::line(palette::TEAL, 2)));
+    fig.series.push(line("D·E_φ", t, e_phi, Style::line(palette::CORAL, 2)));
+    fig.series.push(note(format!("memory ∫du D·E = −DΔA⊥: θ {}, φ {}", g(memory.0), g(memory.1))));
+    place_legend(&mut fig);
+    fig
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -408,5 +423,10 @@ mod tests {
         for name in ["strain", "sky", "spectrum"] {
             assert_eq!(scene::figure(&req, name, &scene::Options::default()).unwrap_err().field(), "force");
         }
+        // The em field figure has its own name, and gravity requests are refused there.
+        let f = scene::figure(&req, "em_field", &scene::Options::default()).unwrap();
+        assert_eq!(&labels(&f)[..2], ["D·E_θ", "D·E_φ"]);
+        assert!(labels(&f)[2].starts_with("memory ∫du D·E"));
+        assert_eq!(scene::figure(&waveform_request(), "em_field", &scene::Options::default()).unwrap_err().field(), "force");
     }
 }

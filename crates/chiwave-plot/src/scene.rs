@@ -48,7 +48,7 @@ pub fn names(kind: &str) -> &'static [&'static str] {
         "light" => &["alpha_b", "rays"],
         "lens" => &["amplification", "magnification"],
         "encounter" => &["chi_b", "chi_j", "orbits"],
-        "waveform" => &["strain", "sky", "sky_memory", "spectrum", "slow_motion"],
+        "waveform" => &["strain", "sky", "sky_memory", "spectrum", "slow_motion", "em_field"],
         _ => &[],
     }
 }
@@ -338,7 +338,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
         }
         "spectrum" => {
             let mut q = r.clone();
-            let (sys, _, _) = r.gravity_system()?;
+            let sys = r.gravity_system()?.binary;
             let (omega_min, omega_max) = spectrum_range(&sys);
             q.spectrum = Some(SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true });
             q.samples = 2;
@@ -361,6 +361,24 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
             let (hp, hc) = (scale(&res.h_plus, a.h_scale), scale(&res.h_cross, a.h_scale));
             let (qp, qc) = (scale(&quad.h_plus, a.h_scale), scale(&quad.h_cross, a.h_scale));
             Ok(figures_radiation::slow_motion(&a.t, a.t_label, (&hp, &hc), (&qp, &qc), a.h_label))
+        }
+        "em_field" => {
+            let mut q = r.clone();
+            q.energy_flux = false;
+            let res = match q.evaluate()? {
+                WaveformResult::Em(e) => e,
+                WaveformResult::Gravity(_) => {
+                    return Err(InputError::Inconsistent {
+                        field: "force",
+                        reason: "figure 'em_field' is for force \"em\"; use 'strain' for gravity".into(),
+                    })
+                }
+            };
+            let (t, t_label) = match &res.physical {
+                Some(p) => (p.u_s.clone(), "retarded time u [s]"),
+                None => (res.u.clone(), "retarded time u [GM/c³]"),
+            };
+            Ok(figures_radiation::em_field(&t, t_label, &res.e_theta, &res.e_phi, (res.memory.theta, res.memory.phi)))
         }
         _ => Err(unknown("waveform", name)),
     }

@@ -39,7 +39,7 @@ impl RadiationJob {
             }
         };
         let projection = Projection::parse("projection", projection).map_err(|e| input_error(&e))?;
-        let (sys, _, _) = req.gravity_system().map_err(|e| input_error(&e))?;
+        let sys = req.gravity_system().map_err(|e| input_error(&e))?.binary;
         let omega = scene::spectrum_omegas(&sys).map_err(|e| input_error(&e))?;
         let inner = waveform::RadiationJob::new(&req, quantity, SKY_N_THETA, SKY_N_PHI, &omega)
             .map_err(|e| input_error(&e))?;

@@ -64,8 +64,8 @@ pub use observer::{antenna_pattern, characteristic_frequency, strain_unit, Physi
 pub use progressive::{JobSpectrum, RadiationJob, RadiationPhase, RadiationSnapshot};
 pub use quadrupole::quadrupole_hyperbola;
 pub use request::{
-    DetectorOptions, DetectorResult, EmPhysicalResult, EmSpectrumResult, EmWaveformResult, GravityWaveformResult,
+    DetectorOptions, DetectorResult, GravitySystem, EmPhysicalResult, EmSpectrumResult, EmWaveformResult, GravityWaveformResult,
     MemoryPair, PhysicalResult, QuadrupoleResult, SpectrumOptions, SpectrumResult, ThetaPhi, WaveformForce,
-    WaveformRequest, WaveformResult, SPECTRUM_SKY,
+    TimeUnit, WaveformRequest, WaveformResult, SPECTRUM_SKY,
 };
 pub use spectrum::{spectrum_angle_integrated, zfl_from_memory, SkySpectrum};

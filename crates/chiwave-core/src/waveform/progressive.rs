@@ -57,6 +57,9 @@ pub struct RadiationSnapshot {
     pub p_rad_rel_diff: Option<f64>,
     /// M c² in joules, when the masses are physical (multiplies the geometric energies).
     pub mc2_j: Option<f64>,
+    /// e_rad_flux and e_rad_closed in joules, when the masses are physical.
+    pub e_rad_flux_j: Option<f64>,
+    pub e_rad_closed_j: Option<f64>,
     /// Directions done and in all.
     pub cells_done: usize,
     pub cells_total: usize,
@@ -107,7 +110,8 @@ impl RadiationJob {
         n_phi: usize,
         omega: &[f64],
     ) -> Result<Self, InputError> {
-        let (sys, observer, mc2_j) = req.gravity_system()?;
+        let g = req.gravity_system()?;
+        let (sys, observer, mc2_j) = (g.binary, g.observer, g.mc2_j);
         for (f, n) in [("n_theta", n_theta), ("n_phi", n_phi)] {
             if !(1..=512).contains(&n) {
                 return Err(InputError::OutOfRange { field: f, value: n as f64, allowed: format!("1 ≤ {f} ≤ 512") });
@@ -220,6 +224,8 @@ impl RadiationJob {
             p_rad_closed: self.closed.momentum,
             p_rad_rel_diff: prel,
             mc2_j: self.mc2_j,
+            e_rad_flux_j: self.mc2_j.map(|k| k * b.energy),
+            e_rad_closed_j: self.mc2_j.map(|k| k * e),
             cells_done,
             cells_total,
         }
@@ -306,7 +312,7 @@ mod tests {
                 steps += 1;
             }
             assert!(steps > 10, "the work was cut into steps ({steps})");
-            let (sys, _, _) = req.gravity_system().unwrap();
+            let sys = req.gravity_system().unwrap().binary;
             let mut it = SkyIntegrator::new(&sys, req.frame, SkyOptions::for_gamma(sys.gamma)).unwrap();
             let full = it.run();
             assert_eq!(last.e_rad_flux, full.energy);

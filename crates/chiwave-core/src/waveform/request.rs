@@ -31,6 +31,19 @@ pub enum WaveformForce {
     Em,
 }
 
+/// Unit of the requested time window.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
+#[serde(rename_all = "snake_case")]
+pub enum TimeUnit {
+    /// GM/c³ with M = m1 + m2.
+    #[default]
+    Gm,
+    /// b/v, the crossing time of the impact parameter at the relative speed.
+    BOverV,
+    /// Seconds (needs physical masses).
+    S,
+}
+
 /// Interferometer response options: source sky angles in the detector frame and polarisation angle.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
@@ -107,10 +120,15 @@ pub struct WaveformRequest {
     /// "rest2" (default) or "cm".
     #[serde(default)]
     pub frame: Frame,
-    /// First retarded time, units of GM/c³.
+    /// First retarded time, in units of `u_unit` (default GM/c³).
     pub u_min: f64,
-    /// Last retarded time, units of GM/c³ (> u_min).
+    /// Last retarded time (> u_min), same unit.
     pub u_max: f64,
+    /// Unit of u_min and u_max: "gm" (GM/c³, default), "b_over_v" (the crossing time b/v, so
+    /// ±10 covers the burst whatever the masses) or "s" (seconds; needs physical masses). The
+    /// output `u` is always in GM/c³ (and `physical.u_s` in seconds).
+    #[serde(default)]
+    pub u_unit: TimeUnit,
     /// Number of evenly spaced samples, both ends included (2..=100000).
     #[serde(default = "default_samples")]
     pub samples: usize,
@@ -234,6 +252,8 @@ pub struct GravityWaveformResult {
     pub h_plus: Vec<f64>,
     /// D·h×/(GM/c²), O(G²) part.
     pub h_cross: Vec<f64>,
+    /// max over the samples of sqrt(h₊² + h×²), D·h/(GM/c²) (O(G²) part).
+    pub peak_abs_h: f64,
     /// Late-minus-early D·Δh/(GM/c²) from the waveform.
     pub memory: MemoryPair,
     /// The same from Braginsky & Thorne 1987 with the LO impulse (independent formula).
@@ -425,6 +445,18 @@ fn read_masses(r: &WaveformRequest) -> Result<Masses, InputError> {
     }
 }
 
+/// A validated gravitational request reduced to what the sky sums need
+/// ([`WaveformRequest::gravity_system`]).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct GravitySystem {
+    /// The binary in units of M (m1 + m2 = 1).
+    pub binary: Binary,
+    /// Observer direction (θ, φ) in radians.
+    pub observer: (f64, f64),
+    /// M c² in joules, when the masses are physical.
+    pub mc2_j: Option<f64>,
+}
+
 /// Inputs shared by the gravitational and the electromagnetic waveform, validated.
 struct Common {
     ms: Masses,
@@ -517,7 +549,7 @@ impl WaveformRequest {
     ///
     /// # Errors
     /// The request's own validation errors; `force` for an electromagnetic request.
-    pub fn gravity_system(&self) -> Result<(Binary, (f64, f64), Option<f64>), InputError> {
+    pub fn gravity_system(&self) -> Result<GravitySystem, InputError> {
         if self.force != WaveformForce::Gravity {
             return Err(InputError::Inconsistent {
                 field: "force",
@@ -526,8 +558,7 @@ impl WaveformRequest {
         }
         let c = self.common()?;
         let sys = Binary::new(c.ms.m1 / c.mtot, c.ms.m2 / c.mtot, c.gamma, c.b_over_m)?;
-        let mc2_j = c.l_tot.map(mc2_joules);
-        Ok((sys, (c.theta, c.phi), mc2_j))
+        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mc2_j: c.l_tot.map(mc2_joules) })
     }
 
     fn common(&self) -> Result<Common, InputError> {
@@ -552,6 +583,10 @@ impl WaveformRequest {
             }
             (None, None) => return Err(InputError::Missing { field: "gamma", hint: "give gamma (> 1) or v".into() }),
         };
+        if !(gamma > 1.0) {
+            let field = if self.gamma.is_some() { "gamma" } else { "v" };
+            return Err(InputError::OutOfRange { field, value: gamma, allowed: "gamma > 1 (a speed v > 0)".into() });
+        }
         // b in units of GM/c² (M = m1 + m2), as for the encounter request: a bare number is b/M.
         let b_len = parse_length("b", &self.b)?;
         let b_over_m = match b_len {
@@ -578,12 +613,27 @@ impl WaveformRequest {
         }
         finite("u_min", self.u_min)?;
         finite("u_max", self.u_max)?;
-        let ulim = 1e15;
-        in_closed("u_min", self.u_min, -ulim, ulim)?;
-        in_closed("u_max", self.u_max, -ulim, ulim)?;
         if self.u_max <= self.u_min {
             return Err(InputError::OutOfRange { field: "u_max", value: self.u_max, allowed: "u_max > u_min".into() });
         }
+        // GM/c³ per unit of the window.
+        let u_scale = match self.u_unit {
+            TimeUnit::Gm => 1.0,
+            TimeUnit::BOverV => b_over_m * gamma / ((gamma - 1.0) * (gamma + 1.0)).sqrt(),
+            TimeUnit::S => match l_tot {
+                Some(l) => crate::units::codata2018::C / l,
+                None => {
+                    return Err(InputError::Inconsistent {
+                        field: "u_unit",
+                        reason: "a window in seconds needs physical masses (e.g. m1 = \"10Msun\"); use gm or b_over_v".into(),
+                    })
+                }
+            },
+        };
+        let (u_min, u_max) = (self.u_min * u_scale, self.u_max * u_scale);
+        let ulim = 1e15;
+        in_closed("u_min", u_min, -ulim, ulim)?;
+        in_closed("u_max", u_max, -ulim, ulim)?;
         if !(2..=100_000).contains(&self.samples) {
             return Err(InputError::OutOfRange {
                 field: "samples",
@@ -592,8 +642,8 @@ impl WaveformRequest {
             });
         }
         let n = self.samples;
-        let du = (self.u_max - self.u_min) / (n - 1) as f64;
-        let u: Vec<f64> = (0..n).map(|i| if i + 1 == n { self.u_max } else { self.u_min + du * i as f64 }).collect();
+        let du = (u_max - u_min) / (n - 1) as f64;
+        let u: Vec<f64> = (0..n).map(|i| if i + 1 == n { u_max } else { u_min + du * i as f64 }).collect();
         Ok(Common { ms, mtot, l_tot, gamma, b_over_m, theta, phi, au, u })
     }
 
@@ -732,8 +782,10 @@ impl WaveformRequest {
         } else {
             None
         };
+        let peak_abs_h = h_plus.iter().zip(&h_cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max);
         Ok(GravityWaveformResult {
             u,
+            peak_abs_h,
             h_plus,
             h_cross,
             memory,
