@@ -4,6 +4,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import { execFileSync } from 'node:child_process';
 import { chromium } from 'playwright-core';
 
 export const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -49,3 +50,15 @@ export function watch(page) {
   page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));
   return { requests, errors };
 }
+
+/** The CLI's result for the same case, or {why} when no CLI binary can be run. */
+export function cli(args) {
+  const bin = ['release', 'debug'].map((p) => path.join(repo, 'target', p, 'chiwave')).find((p) => fs.existsSync(p));
+  const [cmd, pre] = bin ? [bin, []] : ['cargo', ['run', '-q', '-p', 'chiwave-cli', '--']];
+  try {
+    return { json: JSON.parse(execFileSync(cmd, [...pre, ...args, '--json'], { cwd: repo, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] })) };
+  } catch (e) {
+    return { why: `CLI not usable: ${String(e.stderr || e.message).trim().split('\n').pop()}` };
+  }
+}
+

@@ -5,8 +5,7 @@ import { test, before, after } from 'node:test';
 import assert from 'node:assert/strict';
 import fs from 'node:fs';
 import path from 'node:path';
-import { execFileSync } from 'node:child_process';
-import { launch, pageUrl, watch, repo, artifacts } from './browser.mjs';
+import { launch, pageUrl, watch, repo, artifacts, cli } from './browser.mjs';
 
 let browser, page, seen;
 const V = '#view-encounter';
@@ -53,17 +52,6 @@ async function geometricCase(b) {
   await type('#f-encounter-speed', '1.1');
   await pick('#f-encounter-orbit-unit', '');
   await type('#f-encounter-orbit', String(b));
-}
-
-/** The CLI's result for the same case, or {why} when no CLI binary can be run. */
-function cli(args) {
-  const bin = ['release', 'debug'].map((p) => path.join(repo, 'target', p, 'chiwave')).find((p) => fs.existsSync(p));
-  const [cmd, pre] = bin ? [bin, []] : ['cargo', ['run', '-q', '-p', 'chiwave-cli', '--']];
-  try {
-    return { json: JSON.parse(execFileSync(cmd, [...pre, ...args, '--json'], { cwd: repo, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] })) };
-  } catch (e) {
-    return { why: `CLI not usable: ${String(e.stderr || e.message).trim().split('\n').pop()}` };
-  }
 }
 
 test('encounter: χ(3PM) on the page equals the CLI value for m1 = 1, m2 = 3, γ = 1.1, b = 100', async (t) => {

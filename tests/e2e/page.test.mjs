@@ -132,6 +132,17 @@ test('scenario picker loads a built-in scenario', async () => {
   await page.selectOption('#scenario-pick', value);
   assert.ok((await page.textContent('#scenario-note')).length > 10);
   await page.screenshot({ path: path.join(artifacts, 'scenario.png'), fullPage: true });
+  // Every built-in scenario loads into its view with no input marked as wrong (a loaded
+  // request carries null for the fields it leaves out; the views must read those as absent).
+  const stems = await page.locator('#scenario-pick option').evaluateAll((os) => os.map((o) => o.value).filter(Boolean));
+  for (const stem of stems) {
+    await page.selectOption('#scenario-pick', stem);
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
+    const marked = await page.evaluate(() => [...document.querySelectorAll('.view:not([hidden]) .field-error, .view:not([hidden]) .request-error')]
+      .map((e) => e.textContent).filter(Boolean));
+    assert.deepEqual(marked, [], `scenario ${stem}`);
+    assert.doesNotMatch(await page.textContent('#scenario-note'), /could not|no view/i, stem);
+  }
 });
 
 test('lensing view renders', async () => {

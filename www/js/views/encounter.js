@@ -3,6 +3,7 @@
 // (wasm `evaluate`, `figure`, `encounter_nr`) and carries its source on hover/focus.
 // No physics here: the only arithmetic is the display conversion of angles (viewkit.angle).
 import { el, fmt, exact, download, csv } from '../util.js';
+import { controls, select, num, splitQ, ensureOption, badge, numCell, table, showFieldErrors, flagTable as flagsTable, cautionItems } from '../controls.js';
 import { plotCard } from '../plot.js';
 import { ANGLE_UNITS, angle, angleLabel } from '../viewkit.js';
 
@@ -11,6 +12,7 @@ const MASS_UNITS = [['Msun', 'M☉'], ['kg', 'kg'], ['', 'geometric']];
 const SPEED_UNITS = [['gamma', 'γ (Lorentz factor)'], ['c', 'fraction of c'], ['km/s', 'km/s']];
 const ORBIT_UNITS = [['', 'b in GM/c²'], ['km', 'b in km'], ['au', 'b in au'], ['j', 'j = J/(G m₁m₂)']];
 const CHARGE_UNITS = [['', 'geometric (√G M)'], ['e', 'e'], ['C', 'C'], ['statC', 'statC']];
+const { field, input } = controls(ID);
 
 // Order label (core OrderRow.order) → key of the result's `sources` map.
 const ORDER_SOURCE = {
@@ -38,64 +40,6 @@ const SHORT = {
 const KIN_SRC = 'definition, encounter sheet §0 (core encounter::kinematics): γ = u₁·u₂, p∞ = √(γ²−1), ν = m₁m₂/M², Γ = E/M = √(1 + 2ν(γ−1)), p = ν M p∞/Γ, J = p b, j = J/(G m₁m₂)';
 const PHYS_SRC = 'core unit conversion with CODATA 2018 G, c, ħ and IAU 2015 M☉, IAU 2012 au';
 const NR_CONV_SRC = 'core encounter::nr: γ = 1 + (Γ² − 1)/(2ν) with Γ = E/M, j = (J/(G M²))/ν (encounter sheet §0); ADM values of initial data used as asymptotic ones is an approximation (sheet pitfall 9)';
-
-function field(key, label, control, hint) {
-  const err = el('p', { class: 'field-error', id: `f-${ID}-${key}-err`, role: 'alert', 'data-error-for': key });
-  return {
-    root: el('div', { class: 'field', 'data-field': key },
-      el('label', { class: 'name', for: `f-${ID}-${key}` }, label, hint ? el('span', { class: 'hint' }, ` ${hint}`) : null),
-      el('div', { class: 'row' }, control), err),
-    err,
-  };
-}
-
-function input(key, value, aria) {
-  return el('input', { id: `f-${ID}-${key}`, name: key, type: 'text', inputmode: 'decimal', autocomplete: 'off', spellcheck: 'false', value, 'aria-describedby': `f-${ID}-${key}-err`, 'aria-label': aria || null });
-}
-
-function select(id, options, value, aria) {
-  const s = el('select', { id, 'aria-label': aria || null });
-  for (const [v, l] of options) s.append(el('option', { value: v, text: l }));
-  s.value = value;
-  return s;
-}
-
-/** A number from a text box as the request needs it (JSON number), or an error message. */
-function num(key, text) {
-  const t = text.trim().replace('−', '-');
-  if (t === '') return { error: `${key}: enter a number` };
-  const v = Number(t);
-  if (!Number.isFinite(v)) return { error: `${key}: cannot read '${text.trim()}' as a finite number` };
-  return { value: v };
-}
-
-/** Splits "1.52Msun" into ["1.52", "Msun"] (text only; the core parses the quantity). */
-function splitQ(q) {
-  if (q === null || q === undefined) return ['', ''];
-  if (typeof q === 'number') return [String(q), ''];
-  const m = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*)$/.exec(String(q));
-  return m ? [m[1], m[2].trim()] : [String(q), ''];
-}
-
-function ensureOption(sel, value) {
-  if (![...sel.options].some((o) => o.value === value)) sel.append(el('option', { value, text: value }));
-  sel.value = value;
-}
-
-function badge(level, text, note) {
-  return el('span', { class: `badge ${level}`, tabindex: note ? '0' : null, 'data-source': note || null, text });
-}
-
-function numCell(value, source, opts = {}) {
-  const shown = value === null || value === undefined ? '—' : typeof value === 'number' ? fmt(value, opts.digits || 8) : String(value);
-  return el('td', { class: 'num', tabindex: source ? '0' : null, 'data-source': source || null, 'data-value': exact(value), 'data-role': opts.role || null }, shown);
-}
-
-function table(head, rows, cls = '') {
-  return el('table', { class: `results enc ${cls}` },
-    el('thead', {}, el('tr', {}, head.map((h, i) => el('th', { text: h, style: i > 0 && h !== 'Unit' && h !== 'Regime' ? 'text-align:right' : null })))),
-    el('tbody', {}, rows));
-}
 
 export const encounterView = {
   id: ID,
@@ -180,33 +124,21 @@ function makeEncounter(core) {
     return Object.keys(errors).length ? { errors } : { request: req };
   }
 
-  function showErrors(errors) {
-    const used = new Set();
-    for (const f of Object.values(F)) {
-      const key = f.root.dataset.field;
-      const msg = errors[key] || (f.alt && errors[f.alt]) || '';
-      if (errors[key]) used.add(key);
-      if (f.alt && errors[f.alt]) used.add(f.alt);
-      f.err.textContent = msg;
-      const inp = f.root.querySelector('input');
-      if (inp) { if (msg) inp.setAttribute('aria-invalid', 'true'); else inp.removeAttribute('aria-invalid'); }
-    }
-    requestError.textContent = Object.entries(errors).filter(([k]) => !used.has(k)).map(([, m]) => m).join(' ');
-  }
+  function showErrors(errors) { showFieldErrors(F, requestError, errors); }
 
   function load(r) {
     force.value = r.force || 'gravity';
-    if (r.nu !== undefined) { massMode.value = 'nu'; nu.value = String(r.nu); } else {
+    if (r.nu != null) { massMode.value = 'nu'; nu.value = String(r.nu); } else {
       massMode.value = 'masses';
       for (const [inp, u, v] of [[m1, m1u, r.m1], [m2, m2u, r.m2]]) { const [n, unit] = splitQ(v); inp.value = n; ensureOption(u, unit); }
     }
-    if (r.gamma !== undefined) { speedU.value = 'gamma'; speed.value = String(r.gamma); } else {
+    if (r.gamma != null) { speedU.value = 'gamma'; speed.value = String(r.gamma); } else {
       const [n, unit] = splitQ(r.v); speed.value = n; ensureOption(speedU, unit === '' ? 'c' : unit);
     }
-    if (r.j !== undefined) { orbitU.value = 'j'; orbit.value = String(r.j); } else {
+    if (r.j != null) { orbitU.value = 'j'; orbit.value = String(r.j); } else {
       const [n, unit] = splitQ(r.b); orbit.value = n; ensureOption(orbitU, unit === 'M' ? '' : unit);
     }
-    for (const [inp, u, v] of [[q1, q1u, r.q1], [q2, q2u, r.q2]]) if (v !== undefined) { const [n, unit] = splitQ(v); inp.value = n; ensureOption(u, unit); }
+    for (const [inp, u, v] of [[q1, q1u, r.q1], [q2, q2u, r.q2]]) if (v != null) { const [n, unit] = splitQ(v); inp.value = n; ensureOption(u, unit); }
     syncVisibility();
   }
 
@@ -337,7 +269,7 @@ function makeEncounter(core) {
     // banners
     const items = [];
     if (grav && res.captured) items.push(el('li', { class: 'invalid', role: 'alert', 'data-role': 'captured' }, el('strong', { text: 'Captured: ' }), 'the strong-field estimate predicts capture (no scattering angle). PM numbers below are formal only.'));
-    for (const f of res.flags || []) if (f.level !== 'ok') items.push(el('li', { class: f.level }, el('strong', { text: f.level === 'invalid' ? 'Outside validity: ' : 'Caution: ' }), f.message));
+    items.push(...cautionItems(res.flags));
     cautions.replaceChildren(...items);
 
     // 1. angle table
@@ -440,12 +372,7 @@ function makeEncounter(core) {
     }
 
     // 5. flags
-    const flagRows = (res.flags || []).map((f) => el('tr', { 'data-flag': f.key, 'data-level': f.level },
-      el('td', { text: FLAG_NAME[f.key] || f.key.replace(/_/g, ' ') }), el('td', {}, badge(f.level, f.level)),
-      el('td', { class: 'num', text: f.value === null || f.value === undefined ? '' : fmt(f.value, 4) }), el('td', { class: 'msg', text: f.message })));
-    const flagTable = el('table', { class: 'results flags', 'data-role': 'flags' },
-      el('thead', {}, el('tr', {}, el('th', { text: 'Regime check' }), el('th', { text: 'Level' }), el('th', { text: 'Value', style: 'text-align:right' }), el('th', { text: 'What it means' }))),
-      el('tbody', {}, flagRows));
+    const flagTable = flagsTable(res.flags, FLAG_NAME);
 
     body.replaceChildren(
       el('h3', { text: 'Scattering angle, order by order' }), angleTable,

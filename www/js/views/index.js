@@ -2,5 +2,6 @@
 import { lightView } from './light.js';
 import { lensView } from './lens.js';
 import { encounterView } from './encounter.js';
+import { radiationView } from './radiation.js';
 
-export const VIEWS = [lightView, lensView, encounterView];
+export const VIEWS = [lightView, lensView, encounterView, radiationView];
