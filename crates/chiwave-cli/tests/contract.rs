@@ -140,3 +140,36 @@ fn scenarios_and_svg() {
     assert!(svg.starts_with("<svg") && svg.contains("impact parameter"));
     let _ = std::fs::remove_file(&path);
 }
+
+#[test]
+fn waveform_window_units_projection_and_em_figure() {
+    // --u-unit b_over_v: u in GM/c³ is the window times b/v (definition of the option).
+    let v = json(&["waveform", "--m1", "1", "--m2", "1", "--gamma", "1.25", "--b", "30", "--theta", "1", "--phi", "0", "--u-min", "-2",
+        "--u-max", "2", "--u-unit", "b_over_v", "--samples", "3", "--energy-flux", "false", "--json"]);
+    let b_over_v = 30.0 / 0.6; // γ = 1.25 ⇒ v = 0.6 exactly
+    assert!(rel(v["u"][0].as_f64().unwrap(), -2.0 * b_over_v) < 1e-14);
+    assert!(v["peak_abs_h"].as_f64().unwrap() > 0.0);
+    let (code, _, err) = run(&["waveform", "--m1", "1", "--m2", "1", "--gamma", "1.25", "--b", "30", "--theta", "1", "--phi", "0",
+        "--u-min", "-1", "--u-max", "1", "--u-unit", "s"]);
+    assert_eq!(code, 2);
+    assert!(err.contains("--u-unit") && err.contains("physical masses"), "{err}");
+    let base = ["waveform", "--m1", "1", "--m2", "1", "--gamma", "1.25", "--b", "30", "--theta", "1", "--phi", "0", "--u-min", "-100", "--u-max", "100", "--energy-flux", "false"];
+    let path = std::env::temp_dir().join(format!("chiwave-test-sky-{}.svg", std::process::id()));
+    let p = path.to_string_lossy().to_string();
+    let mut a: Vec<&str> = base.to_vec();
+    a.extend(["--svg", &p, "--figure", "sky_memory", "--projection", "equal_area"]);
+    let (code, _, err) = run(&a);
+    assert_eq!(code, 0, "{err}");
+    assert!(std::fs::read_to_string(&path).unwrap().contains("cos θ"));
+    let mut a: Vec<&str> = base.to_vec();
+    a.extend(["--svg", &p, "--figure", "sky", "--projection", "mollweide"]);
+    let (code, _, err) = run(&a);
+    assert_eq!(code, 2);
+    assert!(err.contains("--projection"), "{err}");
+    let mut a: Vec<&str> = base.to_vec();
+    a.extend(["--force", "em", "--q1", "0.1", "--q2", "-0.1", "--svg", &p, "--figure", "em_field"]);
+    let (code, _, err) = run(&a);
+    assert_eq!(code, 0, "{err}");
+    assert!(std::fs::read_to_string(&path).unwrap().contains("D·E_θ"));
+    let _ = std::fs::remove_file(&path);
+}

@@ -46,8 +46,8 @@ impl RadiationJob {
         Ok(RadiationJob { inner, projection })
     }
 
-    /// Works for about `budget_ms` milliseconds (in chunks of a few directions, so a step
-    /// overruns by at most one chunk) and returns the snapshot
+    /// Works for about `budget_ms` milliseconds (one direction at a time, so a step
+    /// overruns by at most one direction) and returns the snapshot
     /// (`chiwave_core::waveform::RadiationSnapshot` as a JS object).
     ///
     /// # Errors
@@ -57,7 +57,7 @@ impl RadiationJob {
         let budget = if budget_ms.is_finite() { budget_ms.clamp(0.0, 1000.0) } else { 8.0 };
         let mut snap = self.inner.snapshot();
         while !snap.done {
-            snap = self.inner.step(4).map_err(|e| input_error(&e))?;
+            snap = self.inner.step(1).map_err(|e| input_error(&e))?;
             if js_sys::Date::now() - t0 >= budget {
                 break;
             }

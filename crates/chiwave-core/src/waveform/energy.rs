@@ -356,21 +356,30 @@ pub fn sky_map_row(
     if i >= n_theta {
         return Err(InputError::OutOfRange { field: "row", value: i as f64, allowed: format!("row < n_theta = {n_theta}") });
     }
+    (0..n_phi).map(|j| sky_cell(sys, frame, quantity, n_theta, n_phi, i, j)).collect()
+}
+
+/// One cell (θ row `i`, φ column `j`) of [`sky_map`]; the grid sizes are checked by the callers.
+pub(crate) fn sky_cell(
+    sys: &Binary,
+    frame: Frame,
+    quantity: SkyQuantity,
+    n_theta: usize,
+    n_phi: usize,
+    i: usize,
+    j: usize,
+) -> Result<f64, InputError> {
     let pi = std::f64::consts::PI;
     let th = (i as f64 + 0.5) * pi / n_theta as f64;
-    let mut row = Vec::with_capacity(n_phi);
-    for j in 0..n_phi {
-        let ph = -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64;
-        let w = DirectionWaveform::new(sys, frame, th, ph, DEFAULT_X_NODES)?;
-        row.push(match quantity {
-            SkyQuantity::EnergyPerSolidAngle => fluence(&w, 32),
-            SkyQuantity::Memory => {
-                let m = w.memory();
-                m[0].hypot(m[1])
-            }
-        });
-    }
-    Ok(row)
+    let ph = -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64;
+    let w = DirectionWaveform::new(sys, frame, th, ph, DEFAULT_X_NODES)?;
+    Ok(match quantity {
+        SkyQuantity::EnergyPerSolidAngle => fluence(&w, 32),
+        SkyQuantity::Memory => {
+            let m = w.memory();
+            m[0].hypot(m[1])
+        }
+    })
 }
 
 impl SkyIntegrator {

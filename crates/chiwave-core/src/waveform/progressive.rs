@@ -6,7 +6,7 @@
 //! ([`SkyIntegrator::run`], [`sky_map`](super::sky_map), [`spectrum_angle_integrated`](super::spectrum_angle_integrated)),
 //! cut into steps (tests below check that the results agree exactly).
 
-use super::energy::{radiated_closed_form, sky_map_row, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
+use super::energy::{radiated_closed_form, sky_cell, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
 use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
 use super::memory::zfl_angle_integrated_closed_form;
@@ -90,7 +90,8 @@ pub struct RadiationJob {
     quantity: SkyQuantity,
     n_theta: usize,
     n_phi: usize,
-    map_rows: Vec<Vec<f64>>,
+    /// Sky-map cells done, row by row (row-major).
+    map_cells: Vec<f64>,
     spectrum: SkySpectrum,
     direction_spectrum: Vec<f64>,
     zfl_direction: f64,
@@ -130,7 +131,7 @@ impl RadiationJob {
             quantity,
             n_theta,
             n_phi,
-            map_rows: Vec::with_capacity(n_theta),
+            map_cells: Vec::with_capacity(n_theta * n_phi),
             direction_spectrum: omega.iter().map(|&x| w.spectrum(x)).collect(),
             zfl_direction: w.spectrum(0.0),
             spectrum,
@@ -138,14 +139,14 @@ impl RadiationJob {
     }
 
     fn map_cells_done(&self) -> usize {
-        self.map_rows.len() * self.n_phi
+        self.map_cells.len()
     }
 
     /// The current phase.
     pub fn phase(&self) -> RadiationPhase {
         if !self.balance.progress().done {
             RadiationPhase::Balance
-        } else if self.map_rows.len() < self.n_theta {
+        } else if self.map_cells.len() < self.n_theta * self.n_phi {
             RadiationPhase::SkyMap
         } else if !self.spectrum.done() {
             RadiationPhase::Spectrum
@@ -154,8 +155,7 @@ impl RadiationJob {
         }
     }
 
-    /// Does about `work` directions of work (at least one sky-map row in the map phase) and
-    /// returns the snapshot.
+    /// Does `work` directions of work (within the current phase) and returns the snapshot.
     ///
     /// # Errors
     /// [`InputError`] from a direction (not expected: every direction comes from a unit vector).
@@ -166,14 +166,12 @@ impl RadiationJob {
                 self.balance.step(work);
             }
             RadiationPhase::SkyMap => {
-                let rows = work.div_ceil(self.n_phi).max(1);
-                for _ in 0..rows {
-                    let i = self.map_rows.len();
-                    if i >= self.n_theta {
-                        break;
-                    }
-                    let row = sky_map_row(&self.sys, self.frame, self.quantity, self.n_theta, self.n_phi, i)?;
-                    self.map_rows.push(row);
+                let total = self.n_theta * self.n_phi;
+                let end = self.map_cells.len().saturating_add(work).min(total);
+                for k in self.map_cells.len()..end {
+                    let (i, j) = (k / self.n_phi, k % self.n_phi);
+                    let v = sky_cell(&self.sys, self.frame, self.quantity, self.n_theta, self.n_phi, i, j)?;
+                    self.map_cells.push(v);
                 }
             }
             RadiationPhase::Spectrum => {
@@ -231,13 +229,14 @@ impl RadiationJob {
         }
     }
 
-    /// The sky map so far: rows not computed yet are NaN.
+    /// The sky map so far: cells not computed yet are NaN.
     pub fn sky_map(&self) -> SkyMap {
         let pi = std::f64::consts::PI;
         let theta = (0..self.n_theta).map(|i| (i as f64 + 0.5) * pi / self.n_theta as f64).collect();
         let phi = (0..self.n_phi).map(|j| -pi + (j as f64 + 0.5) * 2.0 * pi / self.n_phi as f64).collect();
-        let mut values = self.map_rows.clone();
-        values.resize(self.n_theta, vec![f64::NAN; self.n_phi]);
+        let values = (0..self.n_theta)
+            .map(|i| (0..self.n_phi).map(|j| self.map_cells.get(i * self.n_phi + j).copied().unwrap_or(f64::NAN)).collect())
+            .collect();
         SkyMap { theta, phi, values }
     }
 
@@ -336,10 +335,11 @@ mod tests {
         while job.phase() == RadiationPhase::Balance {
             job.step(50).unwrap();
         }
-        let s = job.step(10).unwrap();
+        let s = job.step(13).unwrap();
         assert_eq!(s.phase, RadiationPhase::SkyMap);
         let m = job.sky_map();
         assert!(m.values[0].iter().all(|v| v.is_finite()));
+        assert!(m.values[1][..3].iter().all(|v| v.is_finite()) && m.values[1][3..].iter().all(|v| v.is_nan()));
         assert!(m.values[7].iter().all(|v| v.is_nan()));
         assert!(job.spectrum().de_domega.is_none());
         assert!(s.e_rad_rel_diff.is_some() && s.map_fraction > 0.0 && s.map_fraction < 1.0);

@@ -583,7 +583,7 @@ impl WaveformRequest {
             }
             (None, None) => return Err(InputError::Missing { field: "gamma", hint: "give gamma (> 1) or v".into() }),
         };
-        if !(gamma > 1.0) {
+        if gamma.is_nan() || gamma <= 1.0 {
             let field = if self.gamma.is_some() { "gamma" } else { "v" };
             return Err(InputError::OutOfRange { field, value: gamma, allowed: "gamma > 1 (a speed v > 0)".into() });
         }
