@@ -154,6 +154,7 @@ test('radiation: electromagnetic field and per-body energies equal the CLI', asy
   assert.ok(await page.locator(`${V} [data-plot="radiation-sky"]`).isHidden());
   assert.ok(await page.locator(`${V} [data-role="balance"]`).isHidden());
   assert.match(await page.locator(`${V} [data-plot="radiation-em"] svg`).innerHTML(), /D·E_θ/);
+  assert.match(await page.locator(`${V} [data-plot="radiation-em-spectrum"] svg`).innerHTML(), /Bessel/);
   await page.screenshot({ path: path.join(artifacts, 'radiation-em.png'), fullPage: true });
   await pick('#f-radiation-force', 'gravity');
 });

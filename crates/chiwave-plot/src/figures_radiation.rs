@@ -315,7 +315,7 @@ pub fn em_field(t: &[f64], t_label: &str, e_theta: &[f64], e_phi: &[f64], memory
     let mut fig = Figure::new(
         "Radiation field, rest frame of body 2",
         Axis::linear(t_label),
-        Axis::linear("D·E [c²/√G] (charges in √G M)"),
+        Axis::linear("D·E [c²/√G]"),
     );
     fig.series.push(line("D·E_θ", t, e_theta, Style::line(palette::TEAL, 2)));
     fig.series.push(line("D·E_φ", t, e_phi, Style::line(palette::CORAL, 2)));
@@ -428,5 +428,12 @@ mod tests {
         assert_eq!(&labels(&f)[..2], ["D·E_θ", "D·E_φ"]);
         assert!(labels(&f)[2].starts_with("memory ∫du D·E"));
         assert_eq!(scene::figure(&waveform_request(), "em_field", &scene::Options::default()).unwrap_err().field(), "force");
+        // The closed-form Bessel spectrum: its low-frequency end approaches the soft-photon limit
+        // |DΔA⊥|²/(4π²) from the memory (classical zero-frequency limit, waveform sheet §3).
+        let f = scene::figure(&req, "em_spectrum", &scene::Options::default()).unwrap();
+        assert!(f.x.log && f.y.log && labels(&f).contains(&"dE/dω, over the sphere"));
+        let first = f.series[0].points[0].unwrap().1;
+        let zfl = f.series.iter().find(|s| s.label.starts_with("ω → 0 limit from the memory")).unwrap().points[0].unwrap().1;
+        assert!((first / zfl - 1.0).abs() < 0.05, "{first} vs {zfl}");
     }
 }

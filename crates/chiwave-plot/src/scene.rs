@@ -48,7 +48,7 @@ pub fn names(kind: &str) -> &'static [&'static str] {
         "light" => &["alpha_b", "rays"],
         "lens" => &["amplification", "magnification"],
         "encounter" => &["chi_b", "chi_j", "orbits"],
-        "waveform" => &["strain", "sky", "sky_memory", "spectrum", "slow_motion", "em_field"],
+        "waveform" => &["strain", "sky", "sky_memory", "spectrum", "slow_motion", "em_field", "em_spectrum"],
         _ => &[],
     }
 }
@@ -363,23 +363,52 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
             Ok(figures_radiation::slow_motion(&a.t, a.t_label, (&hp, &hc), (&qp, &qc), a.h_label))
         }
         "em_field" => {
-            let mut q = r.clone();
-            q.energy_flux = false;
-            let res = match q.evaluate()? {
-                WaveformResult::Em(e) => e,
-                WaveformResult::Gravity(_) => {
-                    return Err(InputError::Inconsistent {
-                        field: "force",
-                        reason: "figure 'em_field' is for force \"em\"; use 'strain' for gravity".into(),
-                    })
-                }
-            };
+            let res = em_result(r, name, None)?;
             let (t, t_label) = match &res.physical {
                 Some(p) => (p.u_s.clone(), "retarded time u [s]"),
                 None => (res.u.clone(), "retarded time u [GM/c³]"),
             };
             Ok(figures_radiation::em_field(&t, t_label, &res.e_theta, &res.e_phi, (res.memory.theta, res.memory.phi)))
         }
+        "em_spectrum" => {
+            let res0 = em_result(r, name, None)?;
+            let w = res0.v / res0.b_over_m;
+            let (omega_min, omega_max) = (1e-2 * w, 20.0 * res0.gamma * res0.gamma * w);
+            let opts = SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true };
+            let res = em_result(r, name, Some(opts))?;
+            let s = res.spectrum.ok_or(InputError::Inconsistent { field: "spectrum", reason: "no spectrum in the result".into() })?;
+            let mut fig = figures_radiation::spectrum(&figures_radiation::SpectrumData {
+                omega: &s.omega,
+                de_domega_dsolid: &s.de_domega_dsolid,
+                de_domega: s.de_domega.as_deref(),
+                zfl_direction: s.zfl_direction,
+                zfl_closed: 0.0,
+            });
+            fig.title = "Electromagnetic spectrum (closed-form Bessel K0/K1), rest frame of body 2".into();
+            Ok(fig)
+        }
         _ => Err(unknown("waveform", name)),
+    }
+}
+
+/// The electromagnetic result of a waveform request for figure `name` (no flux integral),
+/// with the spectrum options `spectrum` if given.
+fn em_result(
+    r: &WaveformRequest,
+    name: &str,
+    spectrum: Option<SpectrumOptions>,
+) -> Result<Box<chiwave_core::waveform::EmWaveformResult>, InputError> {
+    let mut q = r.clone();
+    q.energy_flux = false;
+    if spectrum.is_some() {
+        q.spectrum = spectrum;
+        q.samples = 2;
+    }
+    match q.evaluate()? {
+        WaveformResult::Em(e) => Ok(e),
+        WaveformResult::Gravity(_) => Err(InputError::Inconsistent {
+            field: "force",
+            reason: format!("figure '{name}' is for force \"em\"; use 'strain' or 'spectrum' for gravity"),
+        }),
     }
 }

@@ -214,8 +214,9 @@ function makeRadiation(core) {
   const skyCard = plotCard('Sky map', `${ID}-sky`);
   const specCard = plotCard('Spectrum', `${ID}-spectrum`);
   const emCard = plotCard('Radiation field E_θ, E_φ against time', `${ID}-em`);
+  const emSpecCard = plotCard('Electromagnetic spectrum', `${ID}-em-spectrum`);
   const plotNote = el('p', { class: 'muted', 'data-role': 'plot-note' });
-  const plots = el('div', { class: 'plots' }, strainCard.root, skyCard.root, specCard.root, slowCard.root, emCard.root);
+  const plots = el('div', { class: 'plots' }, strainCard.root, skyCard.root, specCard.root, slowCard.root, emCard.root, emSpecCard.root);
 
   const outputs = el('div', { class: 'outputs' }, resultsCard, balanceCard, plotNote, plots);
   const root = el('section', { class: 'view', id: `view-${ID}`, role: 'tabpanel', 'aria-label': 'Radiation' }, inputsCard, outputs);
@@ -367,9 +368,13 @@ function makeRadiation(core) {
 
   function drawPlots(req, grav) {
     for (const c of [strainCard, slowCard, skyCard, specCard]) c.root.hidden = !grav;
-    emCard.root.hidden = grav;
-    plotNote.textContent = grav ? '' : 'The electromagnetic view shows the field and the energies; sky map, spectrum and balance panel are drawn for gravity.';
-    if (!grav) { show(emCard, () => core.figure(req, 'em_field', {})); return; }
+    emCard.root.hidden = grav; emSpecCard.root.hidden = grav;
+    plotNote.textContent = grav ? '' : 'Electromagnetic: the field, its closed-form spectrum and the energies (the flux integral with interference is in the table); the sky map and the live balance panel are drawn for gravity.';
+    if (!grav) {
+      show(emCard, () => core.figure(req, 'em_field', {}));
+      show(emSpecCard, () => core.figure(req, 'em_spectrum', {}));
+      return;
+    }
     show(strainCard, () => core.figure(req, 'strain', {}));
     show(slowCard, () => core.figure(req, 'slow_motion', {}));
   }
