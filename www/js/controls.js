@@ -2,6 +2,17 @@
 // (encounter, radiation). Text and DOM only; no physics here.
 import { el, fmt, exact } from './util.js';
 
+/** Returns a function that runs `run` once on the next animation frame, however often it is
+ *  called before then (input events coalesced to one recompute per frame). */
+export function perFrame(run) {
+  let pending = false;
+  return () => {
+    if (pending) return;
+    pending = true;
+    requestAnimationFrame(() => { pending = false; run(); });
+  };
+}
+
 /** Field, text input and select builders whose ids carry the view's id. */
 export function controls(viewId) {
   function field(key, label, control, hint) {

@@ -4,6 +4,7 @@
 import { el, fmt, exact, download, csv } from './util.js';
 import { buildForm } from './form.js';
 import { plotCard } from './plot.js';
+import { perFrame } from './controls.js';
 
 export const ANGLE_UNITS = [
   ['rad', 'rad'], ['deg', 'deg'], ['arcsec', 'arcsec'], ['mas', 'mas'], ['uas', 'µas'],
@@ -44,8 +45,8 @@ export function sourceOf(result, ...keys) {
 export function makeView(spec, api) {
   let lastGood = null; // {request, result, rows}
   let angleUnit = spec.angleDefault || 'arcsec';
-  let pending = false;
 
+  const schedule = perFrame(() => recompute());
   const form = buildForm(spec.fields.map((f) => ({ ...f, view: spec.id })), schedule);
   const outUnit = el('select', { id: `${spec.id}-angle-unit`, 'aria-label': 'Output angle unit' });
   for (const [v, l] of ANGLE_UNITS) outUnit.append(el('option', { value: v, text: l }));
@@ -83,11 +84,6 @@ export function makeView(spec, api) {
   const outputs = el('div', { class: 'outputs' }, resultsCard, el('div', { class: 'plots' }, plots.map((p) => p.card.root)));
   const root = el('section', { class: 'view', id: `view-${spec.id}`, role: 'tabpanel', 'aria-label': spec.title }, inputsCard, outputs);
 
-  function schedule() {
-    if (pending) return;
-    pending = true;
-    requestAnimationFrame(() => { pending = false; recompute(); });
-  }
 
   function currentRequest() {
     const r = form.read();

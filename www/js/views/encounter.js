@@ -3,7 +3,7 @@
 // (wasm `evaluate`, `figure`, `encounter_nr`) and carries its source on hover/focus.
 // No physics here: the only arithmetic is the display conversion of angles (viewkit.angle).
 import { el, fmt, exact, download, csv } from '../util.js';
-import { controls, select, num, splitQ, ensureOption, badge, numCell, table, showFieldErrors, flagTable as flagsTable, cautionItems } from '../controls.js';
+import { controls, perFrame, select, num, splitQ, ensureOption, badge, numCell, table, showFieldErrors, flagTable as flagsTable, cautionItems } from '../controls.js';
 import { plotCard } from '../plot.js';
 import { ANGLE_UNITS, angle, angleLabel } from '../viewkit.js';
 
@@ -50,7 +50,6 @@ export const encounterView = {
 
 function makeEncounter(core) {
   let angleUnit = 'rad';
-  let pending = false;
   let lastGood = null;
   let gravSources = null;
 
@@ -188,11 +187,10 @@ function makeEncounter(core) {
   const outputs = el('div', { class: 'outputs' }, resultsCard, plotNote, plots, nrCard);
   const root = el('section', { class: 'view', id: `view-${ID}`, role: 'tabpanel', 'aria-label': 'Two-body encounter' }, inputsCard, outputs);
 
+  const nextFrame = perFrame(() => recompute());
   function schedule() {
     syncVisibility();
-    if (pending) return;
-    pending = true;
-    requestAnimationFrame(() => { pending = false; recompute(); });
+    nextFrame();
   }
 
   function markStale(msg) {

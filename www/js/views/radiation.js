@@ -4,7 +4,7 @@
 // progressive `RadiationJob`) and carries its source on hover/focus. No physics here.
 import { el, fmt, exact, download, csv } from '../util.js';
 import { plotCard } from '../plot.js';
-import { controls, select, num, splitQ, ensureOption, badge, numCell, table, showFieldErrors, flagTable, cautionItems } from '../controls.js';
+import { controls, perFrame, select, num, splitQ, ensureOption, badge, numCell, table, showFieldErrors, flagTable, cautionItems } from '../controls.js';
 
 const ID = 'radiation';
 const { field, input } = controls(ID);
@@ -42,7 +42,6 @@ export const radiationView = {
 };
 
 function makeRadiation(core) {
-  let pending = false;
   let lastGood = null; // {request, result}
   let job = null; // the running RadiationJob
   let jobGen = 0;
@@ -221,11 +220,10 @@ function makeRadiation(core) {
   const outputs = el('div', { class: 'outputs' }, resultsCard, balanceCard, plotNote, plots);
   const root = el('section', { class: 'view', id: `view-${ID}`, role: 'tabpanel', 'aria-label': 'Radiation' }, inputsCard, outputs);
 
+  const nextFrame = perFrame(() => recompute());
   function schedule() {
     syncVisibility();
-    if (pending) return;
-    pending = true;
-    requestAnimationFrame(() => { pending = false; recompute(); });
+    nextFrame();
   }
 
   function markStale(msg) {

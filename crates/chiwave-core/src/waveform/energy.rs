@@ -320,11 +320,7 @@ pub fn sky_map(
     n_theta: usize,
     n_phi: usize,
 ) -> Result<SkyMap, InputError> {
-    for (f, n) in [("n_theta", n_theta), ("n_phi", n_phi)] {
-        if !(1..=512).contains(&n) {
-            return Err(InputError::OutOfRange { field: f, value: n as f64, allowed: format!("1 ≤ {f} ≤ 512") });
-        }
-    }
+    check_sky_grid(n_theta, n_phi)?;
     let pi = std::f64::consts::PI;
     let theta: Vec<f64> = (0..n_theta).map(|i| (i as f64 + 0.5) * pi / n_theta as f64).collect();
     let phi: Vec<f64> = (0..n_phi).map(|j| -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64).collect();
@@ -348,15 +344,24 @@ pub fn sky_map_row(
     n_phi: usize,
     i: usize,
 ) -> Result<Vec<f64>, InputError> {
+    check_sky_grid(n_theta, n_phi)?;
+    if i >= n_theta {
+        return Err(InputError::OutOfRange { field: "row", value: i as f64, allowed: format!("row < n_theta = {n_theta}") });
+    }
+    (0..n_phi).map(|j| sky_cell(sys, frame, quantity, n_theta, n_phi, i, j)).collect()
+}
+
+/// Checks a sky-map grid size.
+///
+/// # Errors
+/// [`InputError`] naming `n_theta` or `n_phi` outside 1..=512.
+pub(crate) fn check_sky_grid(n_theta: usize, n_phi: usize) -> Result<(), InputError> {
     for (f, n) in [("n_theta", n_theta), ("n_phi", n_phi)] {
         if !(1..=512).contains(&n) {
             return Err(InputError::OutOfRange { field: f, value: n as f64, allowed: format!("1 ≤ {f} ≤ 512") });
         }
     }
-    if i >= n_theta {
-        return Err(InputError::OutOfRange { field: "row", value: i as f64, allowed: format!("row < n_theta = {n_theta}") });
-    }
-    (0..n_phi).map(|j| sky_cell(sys, frame, quantity, n_theta, n_phi, i, j)).collect()
+    Ok(())
 }
 
 /// One cell (θ row `i`, φ column `j`) of [`sky_map`]; the grid sizes are checked by the callers.

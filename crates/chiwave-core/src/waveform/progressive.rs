@@ -6,7 +6,7 @@
 //! ([`SkyIntegrator::run`], [`sky_map`](super::sky_map), [`spectrum_angle_integrated`](super::spectrum_angle_integrated)),
 //! cut into steps (tests below check that the results agree exactly).
 
-use super::energy::{radiated_closed_form, sky_cell, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
+use super::energy::{check_sky_grid, radiated_closed_form, sky_cell, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
 use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
 use super::memory::zfl_angle_integrated_closed_form;
@@ -113,11 +113,7 @@ impl RadiationJob {
     ) -> Result<Self, InputError> {
         let g = req.gravity_system()?;
         let (sys, observer, mc2_j) = (g.binary, g.observer, g.mc2_j);
-        for (f, n) in [("n_theta", n_theta), ("n_phi", n_phi)] {
-            if !(1..=512).contains(&n) {
-                return Err(InputError::OutOfRange { field: f, value: n as f64, allowed: format!("1 ≤ {f} ≤ 512") });
-            }
-        }
+        check_sky_grid(n_theta, n_phi)?;
         let frame = req.frame;
         let w = DirectionWaveform::new(&sys, frame, observer.0, observer.1, DEFAULT_X_NODES)?;
         let spectrum = SkySpectrum::new(&sys, frame, omega, SPECTRUM_SKY)?;
