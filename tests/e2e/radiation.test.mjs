@@ -50,7 +50,8 @@ async function geometricCase(frameName) {
   await fill('#f-radiation-phi', '20');
   await pick('#f-radiation-frame', frameName);
   await fill('#f-radiation-distance', '');
-  await fill('#f-radiation-window', '10');
+  await fill('#f-radiation-u_min', '-10');
+  await fill('#f-radiation-u_max', '10');
   await pick('#f-radiation-window-unit', 'b_over_v');
   await fill('#f-radiation-samples', '201');
 }
@@ -166,11 +167,14 @@ test('radiation: bad input is named next to its field and keeps the last result'
   assert.match(msg, /b/);
   assert.ok((await page.textContent(`${V} .stale-note`)).length > 0);
   await fill('#f-radiation-b', '40');
-  await fill('#f-radiation-window', '10');
   await pick('#f-radiation-window-unit', 's');
   assert.match(await page.textContent(`${V} [data-error-for="u_min"]`), /physical masses/);
   await pick('#f-radiation-window-unit', 'b_over_v');
   assert.equal(await page.textContent(`${V} [data-error-for="u_min"]`), '');
+  // A window that ends before it starts is refused by the core, named at the window field.
+  await fill('#f-radiation-u_max', '-20');
+  assert.match(await page.textContent(`${V} [data-error-for="u_min"]`), /u_max > u_min/);
+  await fill('#f-radiation-u_max', '10');
 });
 
 test('radiation: no network requests and no console errors', async () => {

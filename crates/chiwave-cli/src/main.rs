@@ -46,7 +46,7 @@ fn command_help(cmd: &str) -> Option<&'static str> {
              [--nu NU] [--q1 Q1 --q2 Q2] [--json|--csv]
   geometric mode: masses and b bare (b in GM/c², M = m1 + m2); physical: 10Msun, 1000km/s, 1au.",
         "waveform" => "chiwave waveform --m1 M1 --m2 M2 (--gamma G | --v V) --b B --theta TH --phi PH
-             [--frame rest2|cm] [--u-min U0 --u-max U1 --samples N] [--distance D]
+             [--frame rest2|cm] [--u-min U0 --u-max U1 [--u-unit gm|b_over_v|s] --samples N] [--distance D]
              [--force em --q1 Q1 --q2 Q2] [--json|--csv]
              [--svg FILE --figure strain|sky|sky_memory|spectrum|slow_motion [--projection cylindrical|equal_area]]",
         "scenario" => "chiwave scenario NAME|FILE.json [--json|--csv]   (see `chiwave scenarios`)",

@@ -60,7 +60,7 @@ function makeRadiation(core) {
   const frame = select(`f-${ID}-frame`, [['rest2', 'rest frame of body 2'], ['cm', 'centre-of-mass frame']], 'cm');
   const dist = input('distance', '100');
   const distU = select(`f-${ID}-distance-unit`, DIST_UNITS, 'Mpc', 'Distance unit');
-  const win = input('window', '8');
+  const uFrom = input('u_min', '-8', 'Window start'), uTo = input('u_max', '8', 'Window end');
   const winU = select(`f-${ID}-window-unit`, WINDOW_UNITS, 'b_over_v', 'Window unit');
   const samples = input('samples', '1200');
   const detOn = el('input', { type: 'checkbox', id: `f-${ID}-detector-on` });
@@ -81,7 +81,7 @@ function makeRadiation(core) {
     phi: field('phi', 'Observer azimuth φ', phi, '(deg, from +x, body 1’s incoming direction)'),
     frame: field('frame', 'Frame', frame),
     distance: field('distance', 'Distance D to the observer', [dist, distU], '(empty: D·h only)'),
-    window: field('u_min', 'Time window ±', [win, winU], '(around closest approach, u = 0)'),
+    window: field('u_min', 'Time window from, to', [uFrom, uTo, winU], '(closest approach at u = 0)'),
     samples: field('samples', 'Samples', samples, '(2 … 100000)'),
     detector: field('detector', 'Interferometer response', el('label', { for: detOn.id }, detOn, ' F₊h₊ + F×h× for arms along the detector’s x and y')),
     dTheta: field('detector.theta', 'Source polar angle in the detector frame', dTheta, '(deg)'),
@@ -107,7 +107,7 @@ function makeRadiation(core) {
     el('p', { class: 'muted' }, 'Axes: body 2 initially at rest at the origin, body 1 incoming along +x, b along +y, z normal to the orbital plane; ',
       'observer n = (sin θ cos φ, sin θ sin φ, cos θ), polarisation basis e_θ, e_φ; u = t − D, closest approach of the undeflected paths at u = 0. ',
       'A bare b is in GM/c² with M = m₁ + m₂.'));
-  const inputs = [force, m1, m2, m1u, m2u, speed, speedU, bIn, bU, theta, phi, frame, dist, distU, win, winU, samples, detOn, dTheta, dPhi, dPsi, q1, q2, q1u, q2u];
+  const inputs = [force, m1, m2, m1u, m2u, speed, speedU, bIn, bU, theta, phi, frame, dist, distU, uFrom, uTo, winU, samples, detOn, dTheta, dPhi, dPsi, q1, q2, q1u, q2u];
   for (const c of inputs) { c.addEventListener('input', schedule); c.addEventListener('change', schedule); }
   for (const c of [skyQ, proj]) c.addEventListener('change', () => { if (lastGood) startJob(lastGood.request); });
   const inputsCard = el('section', { class: 'card', 'aria-labelledby': `${ID}-in-h` },
@@ -131,11 +131,9 @@ function makeRadiation(core) {
     req.b = q(bIn, bU);
     req.theta = number('theta', theta);
     req.phi = number('phi', phi);
-    const w = number('u_min', win);
-    if (w !== undefined) {
-      if (!(w > 0)) errors.u_min = 'window: enter a half-width > 0';
-      req.u_min = -w; req.u_max = w; req.u_unit = winU.value;
-    }
+    req.u_min = number('u_min', uFrom);
+    req.u_max = number('u_max', uTo);
+    req.u_unit = winU.value;
     const n = number('samples', samples);
     if (n !== undefined) {
       if (!Number.isInteger(n)) errors.samples = 'samples: enter a whole number';
@@ -170,9 +168,7 @@ function makeRadiation(core) {
     theta.value = a(r.theta); phi.value = a(r.phi);
     frame.value = r.frame || 'rest2';
     if (r.distance != null) { const [n, unit] = splitQ(r.distance); dist.value = n; ensureOption(distU, unit); } else dist.value = '';
-    const half = (r.u_max - r.u_min) / 2;
-    // A window not centred on u = 0 is loaded as the half-width of its span (shown as such).
-    win.value = String(Number(half.toPrecision(12)));
+    uFrom.value = String(r.u_min); uTo.value = String(r.u_max);
     winU.value = r.u_unit || 'gm';
     samples.value = String(r.samples || 1000);
     detOn.checked = !!r.detector;
