@@ -102,6 +102,9 @@ test('radiation: figures — strain with memory, sky map in both projections, sp
   assert.match(await svg('slow'), /quadrupole hyperbola/);
   assert.match(await svg('sky'), /Energy per solid angle/);
   assert.match(await svg('spectrum'), /over the sphere/, 'dE/dω over the sphere drawn once its phase is done');
+  // Hovering the map reads the cell's value (the heat layer travels with the rendered figure).
+  await page.locator(`${V} [data-plot="radiation-sky"] .plot-box`).hover();
+  assert.match(await page.textContent(`${V} [data-plot="radiation-sky"] [data-role="heat-readout"]`), /^dE\/dΩ = \S+ \[M\]$/);
   await pick('#f-radiation-projection', 'equal_area');
   await pick('#f-radiation-sky-quantity', 'memory');
   await skyDone();

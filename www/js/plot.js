@@ -64,6 +64,24 @@ function seriesAt(s, frame, px, py, x) {
   return bd < 30 * 30 ? best : null;
 }
 
+/** Index k of the cell edges[k]..edges[k+1] holding v (edges ascending or descending), or -1. */
+function cellOf(edges, v) {
+  for (let k = 0; k + 1 < edges.length; k++) {
+    const lo = Math.min(edges[k], edges[k + 1]), hi = Math.max(edges[k], edges[k + 1]);
+    if (v >= lo && v <= hi) return k;
+  }
+  return -1;
+}
+
+/** Readout of a heat-map cell under the pointer: its value, or a note while it is not computed. */
+function heatAt(heat, x, y) {
+  const j = cellOf(heat.x_edges, x), i = cellOf(heat.y_edges, y);
+  const v = i >= 0 && j >= 0 ? heat.values[i][j] : null;
+  const name = heat.label.split(' [')[0];
+  const text = typeof v === 'number' && Number.isFinite(v) ? `${name} = ${fmt(v, 5)}${heat.label.includes('[') ? ` [${heat.label.split('[')[1].split(']')[0]}]` : ''}` : `${name}: not computed yet`;
+  return el('span', { class: 'item', 'data-role': 'heat-readout' }, text);
+}
+
 /** Creates a plot card; returns {root, show(rendered), fail(message)}. */
 export function plotCard(title, fileStem) {
   const box = el('div', { class: 'plot-box', tabindex: '0', role: 'img', 'aria-label': title });
@@ -105,6 +123,7 @@ export function plotCard(title, fileStem) {
     crossY.style.width = `${f.width * scale}px`;
     const [x, y] = toData(f, px, py);
     const items = [el('span', { class: 'item' }, `${current.x_label.split(' [')[0]} = ${fmt(x, 4)}, ${current.y_label.split(' [')[0]} = ${fmt(y, 4)}`)];
+    if (current.heat) items.push(heatAt(current.heat, x, y));
     for (const s of current.series) {
       const v = seriesAt(s, f, px, py, x);
       if (!v) continue;

@@ -253,6 +253,8 @@ pub struct Rendered {
     pub svg: String,
     pub frame: PlotFrame,
     pub series: Vec<HoverSeries>,
+    /// The heat-map layer's cells, for a hover readout of the value under the pointer.
+    pub heat: Option<heatmap::Heat>,
 }
 
 /// Drawing failed (only a backend write error can cause this).
@@ -721,7 +723,15 @@ pub fn render_for_page(fig: &Figure) -> Result<Rendered, PlotError> {
             y: s.points.iter().map(|p| p.map(|p| p.1)).collect(),
         })
         .collect();
-    Ok(Rendered { title: fig.title.clone(), x_label: fig.x.label.clone(), y_label: fig.y.label.clone(), svg, frame, series })
+    Ok(Rendered {
+        title: fig.title.clone(),
+        x_label: fig.x.label.clone(),
+        y_label: fig.y.label.clone(),
+        svg,
+        frame,
+        series,
+        heat: fig.heat.clone(),
+    })
 }
 
 #[cfg(test)]
