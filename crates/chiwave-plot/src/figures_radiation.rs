@@ -4,6 +4,7 @@
 
 use crate::heatmap::Heat;
 use chiwave_core::error::InputError;
+use chiwave_core::waveform::SpectrumSi;
 use crate::{palette, Axis, Dash, Figure, LegendAt, Markers, Series, Style};
 
 fn line(label: impl Into<String>, xs: &[f64], ys: &[f64], style: Style) -> Series {
@@ -246,7 +247,7 @@ pub fn sky(d: &SkyData) -> Figure {
     fig
 }
 
-/// Inputs of the spectrum figure.
+/// Inputs of the spectrum figure (geometric values; `si` converts them for the plot).
 #[derive(Debug, Clone, PartialEq)]
 pub struct SpectrumData<'a> {
     pub omega: &'a [f64],
@@ -254,37 +255,58 @@ pub struct SpectrumData<'a> {
     pub de_domega: Option<&'a [f64]>,
     /// ω → 0 limit in the observer direction (from the memory).
     pub zfl_direction: f64,
-    /// ω → 0 limit over the sphere (closed form).
+    /// ω → 0 limit over the sphere (closed form); ≤ 0 for none.
     pub zfl_closed: f64,
+    /// The core's SI factors (`chiwave_core::waveform::spectrum_si`): when given, the axes are
+    /// frequency in Hz and dE/df in J/Hz.
+    pub si: Option<SpectrumSi>,
 }
 
-/// dE/(dω dΩ) and dE/dω against ω on log axes, with the zero-frequency limits marked as
-/// dotted levels and as points at the low-frequency edge.
+/// dE/(dω dΩ) and dE/dω against ω on log axes (or dE/(df dΩ), dE/df against f in SI), with the
+/// zero-frequency limits marked as dotted levels.
 pub fn spectrum(d: &SpectrumData) -> Figure {
-    let mut fig = Figure::new(
-        "Spectrum",
-        Axis::log("angular frequency ω [c³/(GM)]"),
-        Axis::log("dE/(dω dΩ), dE/dω [M²] (E in Mc², ω in c³/GM)"),
-    );
-    let (x0, x1) = extent(d.omega);
-    fig.series.push(line("dE/(dω dΩ), observer direction", d.omega, d.de_domega_dsolid, Style::line(palette::TEAL, 2)));
-    if let Some(s) = d.de_domega {
-        fig.series.push(line("dE/dω, over the sphere", d.omega, s, Style::line(palette::INDIGO, 2)));
+    let (kx, ky, x_label, y_label, dir, sph) = match d.si {
+        Some(s) => (
+            s.hz_per_omega,
+            s.j_per_hz,
+            "frequency f [Hz]",
+            "dE/(df dΩ) [J Hz⁻¹ sr⁻¹], dE/df [J Hz⁻¹]",
+            "dE/(df dΩ), observer direction (D² absorbed)",
+            "dE/df, over the sphere",
+        ),
+        None => (
+            1.0,
+            1.0,
+            "angular frequency ω [c³/(GM)]",
+            "dE/(dω dΩ), dE/dω [M²] (E in Mc², ω in c³/GM)",
+            "dE/(dω dΩ), observer direction",
+            "dE/dω, over the sphere",
+        ),
+    };
+    let x: Vec<f64> = d.omega.iter().map(|w| w * kx).collect();
+    let ys = |v: &[f64]| -> Vec<f64> { v.iter().map(|y| y * ky).collect() };
+    let dir_y = ys(d.de_domega_dsolid);
+    let sph_y = d.de_domega.map(ys);
+    let (zfl_dir, zfl_sph) = (d.zfl_direction * ky, d.zfl_closed * ky);
+    let mut fig = Figure::new("Spectrum", Axis::log(x_label), Axis::log(y_label));
+    let (x0, x1) = extent(&x);
+    fig.series.push(line(dir, &x, &dir_y, Style::line(palette::TEAL, 2)));
+    if let Some(s) = &sph_y {
+        fig.series.push(line(sph, &x, s, Style::line(palette::INDIGO, 2)));
     }
     if x0 < x1 {
-        if d.zfl_direction > 0.0 {
-            fig.series.push(level("ω → 0 limit from the memory (direction)", x0, x1, d.zfl_direction, Style::dotted(palette::TEAL, 2)));
+        if zfl_dir > 0.0 {
+            fig.series.push(level("ω → 0 limit from the memory (direction)", x0, x1, zfl_dir, Style::dotted(palette::TEAL, 2)));
         }
-        if d.de_domega.is_some() && d.zfl_closed > 0.0 {
-            fig.series.push(level("ω → 0 limit, closed form (sphere)", x0, x1, d.zfl_closed, Style::dotted(palette::INDIGO, 2)));
+        if sph_y.is_some() && zfl_sph > 0.0 {
+            fig.series.push(level("ω → 0 limit, closed form (sphere)", x0, x1, zfl_sph, Style::dotted(palette::INDIGO, 2)));
         }
     }
     // Keep the plot from being dominated by the exponential tail: at most 8 decades below the top.
-    let top = d
-        .de_domega_dsolid
+    let top = dir_y
         .iter()
-        .chain(d.de_domega.unwrap_or(&[]))
-        .chain([d.zfl_direction, d.zfl_closed].iter())
+        .chain(sph_y.as_deref().unwrap_or(&[]))
+        .chain([zfl_dir, zfl_sph].iter())
         .copied()
         .filter(|v| v.is_finite() && *v > 0.0)
         .fold(0.0, f64::max);
@@ -403,6 +425,24 @@ mod tests {
         let first = f.series[0].points[0].unwrap().1;
         let zfl = f.series.iter().find(|s| s.label.starts_with("ω → 0 limit from the memory")).unwrap().points[0].unwrap().1;
         assert!((first / zfl - 1.0).abs() < 0.05, "{first} vs {zfl}");
+    }
+
+    #[test]
+    fn physical_spectrum_is_in_hertz_and_joules_per_hertz() {
+        let mut req = waveform_request();
+        if let Request::Waveform(r) = &mut req {
+            r.m1 = Some(serde_json::from_str(r#""10 Msun""#).unwrap());
+            r.m2 = Some(serde_json::from_str(r#""10 Msun""#).unwrap());
+        }
+        let geo = scene::figure(&waveform_request(), "spectrum", &scene::Options::default()).unwrap();
+        let si = scene::figure(&req, "spectrum", &scene::Options::default()).unwrap();
+        assert!(si.x.label.contains("[Hz]") && si.y.label.contains("J Hz⁻¹"));
+        assert!(labels(&si).contains(&"dE/df, over the sphere"));
+        // Same curve, rescaled by the core's factors (checked in waveform::observer).
+        let s = chiwave_core::waveform::spectrum_si(20.0 * chiwave_core::units::SUN_LENGTH_M);
+        let (g0, s0) = (geo.series[0].points[5].unwrap(), si.series[0].points[5].unwrap());
+        assert!((s0.0 / (g0.0 * s.hz_per_omega) - 1.0).abs() < 1e-12);
+        assert!((s0.1 / (g0.1 * s.j_per_hz) - 1.0).abs() < 1e-12);
     }
 
     #[test]

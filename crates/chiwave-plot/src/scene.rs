@@ -3,7 +3,7 @@
 
 use crate::{figures, figures_encounter, figures_radiation, Figure};
 use chiwave_core::encounter::EncounterRequest;
-use chiwave_core::waveform::{sky_map, Binary, Frame, SkyQuantity, SpectrumOptions, WaveformRequest, WaveformResult, GravityWaveformResult};
+use chiwave_core::waveform::{spectrum_si, sky_map, Binary, Frame, SkyQuantity, SpectrumOptions, WaveformRequest, WaveformResult, GravityWaveformResult};
 use chiwave_core::deflection::{self, LightRequest};
 use chiwave_core::error::InputError;
 use chiwave_core::lensing::{self, LensRequest};
@@ -350,6 +350,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
                 de_domega: s.de_domega.as_deref(),
                 zfl_direction: s.zfl_direction,
                 zfl_closed: s.zfl_closed,
+                si: res.physical.as_ref().map(|p| spectrum_si(p.scales.mass_length_m)),
             }))
         }
         "slow_motion" => {
@@ -383,6 +384,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
                 de_domega: s.de_domega.as_deref(),
                 zfl_direction: s.zfl_direction,
                 zfl_closed: 0.0,
+                si: None,
             });
             fig.title = "Electromagnetic spectrum (closed-form Bessel K0/K1), rest frame of body 2".into();
             Ok(fig)

@@ -115,6 +115,7 @@ impl RadiationJob {
             de_domega: s.de_domega,
             zfl_direction: s.zfl_direction,
             zfl_closed: s.zfl_closed,
+            si: s.si,
         });
         let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
         to_js(&r)

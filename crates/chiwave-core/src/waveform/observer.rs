@@ -80,3 +80,51 @@ pub fn antenna_pattern(theta: f64, phi: f64, psi: f64) -> (f64, f64) {
     let (s2s, c2s) = (2.0 * psi).sin_cos();
     (a * c2p * c2s - ct * s2p * s2s, a * c2p * s2s + ct * s2p * c2s)
 }
+
+/// Factors that turn a geometric spectrum (ω in c³/(GM), dE/dω with E in M c²) into SI:
+/// frequency in Hz and spectral energy density in J/Hz.
+#[derive(Debug, Clone, Copy, PartialEq, serde::Serialize)]
+pub struct SpectrumSi {
+    /// f [Hz] = `hz_per_omega` × ω.
+    pub hz_per_omega: f64,
+    /// dE/df [J/Hz] = `j_per_hz` × (dE/dω, geometric); the same for dE/(df dΩ) in J/(Hz sr).
+    pub j_per_hz: f64,
+}
+
+/// The SI factors of a spectrum for a total mass of length L = G M/c² (metres).
+///
+/// # Formula
+/// The geometric units are ω₀ = c/L (rad/s) and E₀ = M c² = L c⁴/G (J), so f = ω ω₀/(2π) and
+/// dE/df = 2π dE/dω = 2π (E₀/ω₀) × (dE/dω)_geo = 2π L² c³/G × (dE/dω)_geo (definitions; CODATA
+/// 2018 G and exact c). Their product is E₀: ∫dE/df df = ∫dE/dω dω.
+///
+/// # Examples
+/// ```
+/// use chiwave_core::units::SUN_LENGTH_M;
+/// let s = chiwave_core::waveform::spectrum_si(SUN_LENGTH_M);
+/// // G M☉/c³ = 4.925 490 947 µs (IAU 2015 nominal GM☉, common value): ω = 1 is 32.31 kHz.
+/// assert!((s.hz_per_omega * 2.0 * std::f64::consts::PI * 4.925_490_947e-6 - 1.0).abs() < 1e-9);
+/// ```
+pub fn spectrum_si(mass_length_m: f64) -> SpectrumSi {
+    let g = crate::units::codata2018::G;
+    let two_pi = 2.0 * std::f64::consts::PI;
+    SpectrumSi {
+        hz_per_omega: C / (two_pi * mass_length_m),
+        j_per_hz: two_pi * mass_length_m * mass_length_m * C * C * C / g,
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn spectrum_si_factors_keep_the_energy() {
+        // ∫ dE/df df = ∫ dE/dω dω: the product of the two factors is M c² in joules
+        // (M c² = (GM/c²) c⁴/G, definition), here for 20 M☉ (IAU 2015 GM☉, CODATA 2018 G).
+        let l = 20.0 * crate::units::SUN_LENGTH_M;
+        let s = spectrum_si(l);
+        let mc2 = 20.0 * crate::units::M_SUN_KG * C * C;
+        assert!((s.hz_per_omega * s.j_per_hz / mc2 - 1.0).abs() < 1e-14);
+    }
+}

@@ -9,6 +9,7 @@
 use super::energy::{check_sky_grid, radiated_closed_form, sky_cell, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
 use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
+use super::observer::{spectrum_si, SpectrumSi};
 use super::memory::zfl_angle_integrated_closed_form;
 use super::request::{WaveformRequest, SPECTRUM_SKY};
 use super::spectrum::SkySpectrum;
@@ -85,6 +86,8 @@ pub struct RadiationJob {
     frame: Frame,
     observer: (f64, f64),
     mc2_j: Option<f64>,
+    /// SI factors of the spectrum, when the masses are physical.
+    si: Option<SpectrumSi>,
     closed: RadiatedClosed,
     balance: SkyIntegrator,
     quantity: SkyQuantity,
@@ -113,6 +116,7 @@ impl RadiationJob {
     ) -> Result<Self, InputError> {
         let g = req.gravity_system()?;
         let (sys, observer, mc2_j) = (g.binary, g.observer, g.mc2_j);
+        let si = g.mass_length_m.map(spectrum_si);
         check_sky_grid(n_theta, n_phi)?;
         let frame = req.frame;
         let w = DirectionWaveform::new(&sys, frame, observer.0, observer.1, DEFAULT_X_NODES)?;
@@ -122,6 +126,7 @@ impl RadiationJob {
             frame,
             observer,
             mc2_j,
+            si,
             closed: radiated_closed_form(&sys, frame),
             balance: SkyIntegrator::new(&sys, frame, SkyOptions::for_gamma(sys.gamma))?,
             quantity,
@@ -262,6 +267,7 @@ impl RadiationJob {
             de_domega: if self.spectrum.done() { Some(self.spectrum.values()) } else { None },
             zfl_direction: self.zfl_direction,
             zfl_closed: zfl_angle_integrated_closed_form(&self.sys),
+            si: self.si,
         }
     }
 }
@@ -277,6 +283,8 @@ pub struct JobSpectrum<'a> {
     pub de_domega: Option<&'a [f64]>,
     pub zfl_direction: f64,
     pub zfl_closed: f64,
+    /// SI factors, when the masses are physical.
+    pub si: Option<SpectrumSi>,
 }
 
 #[cfg(test)]

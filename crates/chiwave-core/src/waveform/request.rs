@@ -455,6 +455,8 @@ pub struct GravitySystem {
     pub observer: (f64, f64),
     /// M c² in joules, when the masses are physical.
     pub mc2_j: Option<f64>,
+    /// G M/c² in metres, when the masses are physical.
+    pub mass_length_m: Option<f64>,
 }
 
 /// Inputs shared by the gravitational and the electromagnetic waveform, validated.
@@ -558,7 +560,7 @@ impl WaveformRequest {
         }
         let c = self.common()?;
         let sys = Binary::new(c.ms.m1 / c.mtot, c.ms.m2 / c.mtot, c.gamma, c.b_over_m)?;
-        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mc2_j: c.l_tot.map(mc2_joules) })
+        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mc2_j: c.l_tot.map(mc2_joules), mass_length_m: c.l_tot })
     }
 
     fn common(&self) -> Result<Common, InputError> {
