@@ -188,6 +188,8 @@ pub struct SkyData<'a> {
     pub observer: Option<(f64, f64)>,
     pub frame: &'a str,
     pub projection: Projection,
+    /// M c² in joules (from the core) when the masses are physical: dE/dΩ is then drawn in J/sr.
+    pub mc2_j: Option<f64>,
 }
 
 /// Cell edges from evenly spaced centres over [lo, hi].
@@ -211,9 +213,10 @@ fn wrap_deg(phi: f64) -> f64 {
 /// body 1's incoming direction φ = 0 in the middle), colour scale and colour bar; the observer
 /// direction marked.
 pub fn sky(d: &SkyData) -> Figure {
-    let (title, label, log) = match d.kind {
-        SkyKind::Energy => (format!("Energy per solid angle, {}", d.frame), "dE/dΩ [M]", true),
-        SkyKind::Memory => (format!("Memory over the sky, {}", d.frame), "|DΔh| [GM/c²]", false),
+    let (title, label, log, k) = match (d.kind, d.mc2_j) {
+        (SkyKind::Energy, None) => (format!("Energy per solid angle, {}", d.frame), "dE/dΩ [M]", true, 1.0),
+        (SkyKind::Energy, Some(k)) => (format!("Energy per solid angle, {}", d.frame), "dE/dΩ [J sr⁻¹]", true, k),
+        (SkyKind::Memory, _) => (format!("Memory over the sky, {}", d.frame), "|DΔh| [GM/c²]", false, 1.0),
     };
     let mut fig = Figure::new(
         title,
@@ -225,7 +228,7 @@ pub fn sky(d: &SkyData) -> Figure {
     fig.heat = Some(Heat {
         x_edges: edges(d.phi.len(), -180.0, 180.0),
         y_edges: ye,
-        values: d.values.to_vec(),
+        values: d.values.iter().map(|row| row.iter().map(|v| v * k).collect()).collect(),
         label: label.into(),
         log,
         decades: 4.0,
@@ -428,7 +431,7 @@ mod tests {
     }
 
     #[test]
-    fn physical_spectrum_is_in_hertz_and_joules_per_hertz() {
+    fn physical_spectrum_in_hertz_and_sky_in_joules_per_steradian() {
         let mut req = waveform_request();
         if let Request::Waveform(r) = &mut req {
             r.m1 = Some(serde_json::from_str(r#""10 Msun""#).unwrap());
@@ -443,6 +446,12 @@ mod tests {
         let (g0, s0) = (geo.series[0].points[5].unwrap(), si.series[0].points[5].unwrap());
         assert!((s0.0 / (g0.0 * s.hz_per_omega) - 1.0).abs() < 1e-12);
         assert!((s0.1 / (g0.1 * s.j_per_hz) - 1.0).abs() < 1e-12);
+        // The sky map of dE/dΩ in J/sr: the geometric map times M c² (20 M☉, IAU 2015 GM☉).
+        let (g, p) = (scene::figure(&waveform_request(), "sky", &scene::Options::default()).unwrap(), scene::figure(&req, "sky", &scene::Options::default()).unwrap());
+        let (gh, ph) = (g.heat.unwrap(), p.heat.unwrap());
+        assert_eq!(ph.label, "dE/dΩ [J sr⁻¹]");
+        let mc2 = 20.0 * chiwave_core::units::M_SUN_KG * 299_792_458f64.powi(2);
+        assert!((ph.values[3][7] / (gh.values[3][7] * mc2) - 1.0).abs() < 1e-12);
     }
 
     #[test]

@@ -334,6 +334,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
                 observer: Some(obs),
                 frame: frame_caption(res.frame),
                 projection,
+                mc2_j: res.physical.as_ref().map(|p| p.mc2_j),
             }))
         }
         "spectrum" => {

@@ -97,6 +97,7 @@ impl RadiationJob {
             observer: Some(self.inner.observer()),
             frame: scene::frame_caption(self.inner.frame()),
             projection: self.projection,
+            mc2_j: self.inner.snapshot().mc2_j,
         });
         let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
         to_js(&r)
