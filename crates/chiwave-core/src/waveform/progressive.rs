@@ -11,7 +11,7 @@ use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
 use super::observer::{spectrum_si, SpectrumSi};
 use super::memory::zfl_angle_integrated_closed_form;
-use super::request::{WaveformRequest, SPECTRUM_SKY};
+use super::request::{mc2_joules, WaveformRequest, SPECTRUM_SKY};
 use super::spectrum::SkySpectrum;
 use super::SkyMap;
 use crate::error::InputError;
@@ -115,7 +115,7 @@ impl RadiationJob {
         omega: &[f64],
     ) -> Result<Self, InputError> {
         let g = req.gravity_system()?;
-        let (sys, observer, mc2_j) = (g.binary, g.observer, g.mc2_j);
+        let (sys, observer, mc2_j) = (g.binary, g.observer, g.mass_length_m.map(mc2_joules));
         let si = g.mass_length_m.map(spectrum_si);
         check_sky_grid(n_theta, n_phi)?;
         let frame = req.frame;

@@ -453,8 +453,6 @@ pub struct GravitySystem {
     pub binary: Binary,
     /// Observer direction (θ, φ) in radians.
     pub observer: (f64, f64),
-    /// M c² in joules, when the masses are physical.
-    pub mc2_j: Option<f64>,
     /// G M/c² in metres, when the masses are physical.
     pub mass_length_m: Option<f64>,
 }
@@ -546,7 +544,7 @@ impl WaveformRequest {
     }
 
     /// The validated gravitational system in units of M (m1 + m2 = 1), the observer direction
-    /// (θ, φ) in radians and M c² in joules when the masses are physical: what a progressive
+    /// (θ, φ) in radians and G M/c² in metres when the masses are physical: what a progressive
     /// sky computation ([`super::RadiationJob`]) needs, without evaluating the waveform.
     ///
     /// # Errors
@@ -560,7 +558,7 @@ impl WaveformRequest {
         }
         let c = self.common()?;
         let sys = Binary::new(c.ms.m1 / c.mtot, c.ms.m2 / c.mtot, c.gamma, c.b_over_m)?;
-        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mc2_j: c.l_tot.map(mc2_joules), mass_length_m: c.l_tot })
+        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mass_length_m: c.l_tot })
     }
 
     fn common(&self) -> Result<Common, InputError> {
@@ -928,12 +926,12 @@ impl WaveformRequest {
     }
 }
 
-/// The validity flag on b for the gravitational LO waveform (thresholds at [`B_INVALID`], [`B_CAUTION`]).
 /// M c² in joules from G M/c² in metres: (GM/c²) c⁴/G (CODATA 2018 G and c).
-fn mc2_joules(mass_length_m: f64) -> f64 {
+pub(crate) fn mc2_joules(mass_length_m: f64) -> f64 {
     mass_length_m * crate::units::codata2018::C.powi(4) / crate::units::codata2018::G
 }
 
+/// The validity flag on b for the gravitational LO waveform (thresholds at [`B_INVALID`], [`B_CAUTION`]).
 fn b_flag(b_over_m: f64) -> Flag {
     let (level, msg) = if b_over_m < B_INVALID {
         (
