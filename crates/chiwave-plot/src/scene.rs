@@ -279,8 +279,13 @@ fn waveform_axes(res: &GravityWaveformResult) -> Axes {
 /// the Doppler-raised exponential fall-off (rule of thumb ω ~ v/b, waveform sheet §6; a plot
 /// range, not a result).
 pub fn spectrum_range(sys: &Binary) -> (f64, f64) {
-    let w = sys.v() / sys.b;
-    (1e-2 * w, 20.0 * sys.gamma * sys.gamma * w)
+    omega_range(sys.v(), sys.b, sys.gamma)
+}
+
+/// [`spectrum_range`] from the relative speed v, b/(GM/c²) and γ.
+fn omega_range(v: f64, b: f64, gamma: f64) -> (f64, f64) {
+    let w = v / b;
+    (1e-2 * w, 20.0 * gamma * gamma * w)
 }
 
 /// The spectrum figure's ω grid for a system (`SPECTRUM_POINTS` log-spaced values over
@@ -373,9 +378,10 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
             Ok(figures_radiation::em_field(&t, t_label, &res.e_theta, &res.e_phi, (res.memory.theta, res.memory.phi)))
         }
         "em_spectrum" => {
-            let res0 = em_result(r, name, None)?;
-            let w = res0.v / res0.b_over_m;
-            let (omega_min, omega_max) = (1e-2 * w, 20.0 * res0.gamma * res0.gamma * w);
+            let mut q = r.clone();
+            q.samples = 2;
+            let res0 = em_result(&q, name, None)?;
+            let (omega_min, omega_max) = omega_range(res0.v, res0.b_over_m, res0.gamma);
             let opts = SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true };
             let res = em_result(r, name, Some(opts))?;
             let s = res.spectrum.ok_or(InputError::Inconsistent { field: "spectrum", reason: "no spectrum in the result".into() })?;
@@ -405,7 +411,7 @@ fn em_result(
     q.energy_flux = false;
     if spectrum.is_some() {
         q.spectrum = spectrum;
-        q.samples = 2;
+        q.samples = 2; // the spectrum needs no time samples
     }
     match q.evaluate()? {
         WaveformResult::Em(e) => Ok(e),
