@@ -75,7 +75,7 @@ impl RadiationJob {
 
     /// True when every phase is done.
     pub fn done(&self) -> bool {
-        self.inner.snapshot().done
+        self.inner.phase() == waveform::RadiationPhase::Done
     }
 
     /// The sky map as far as it is computed (blank rows not yet done), rendered
@@ -97,7 +97,7 @@ impl RadiationJob {
             observer: Some(self.inner.observer()),
             frame: scene::frame_caption(self.inner.frame()),
             projection: self.projection,
-            mc2_j: self.inner.snapshot().mc2_j,
+            mc2_j: self.inner.mc2_j(),
         });
         let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
         to_js(&r)

@@ -251,6 +251,11 @@ impl RadiationJob {
         self.frame
     }
 
+    /// M c² in joules, when the masses are physical.
+    pub fn mc2_j(&self) -> Option<f64> {
+        self.mc2_j
+    }
+
     /// Observer direction (θ, φ) in radians.
     pub fn observer(&self) -> (f64, f64) {
         self.observer
