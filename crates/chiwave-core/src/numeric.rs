@@ -1,5 +1,9 @@
 //! Shared numerical tools: Gauss–Legendre rules and the tolerance policy.
 //!
+//! Sources: Gauss–Legendre quadrature, nodes the zeros of P_n and weights 2/((1 − x²)P_n'(x)²)
+//! (Abramowitz & Stegun 1964, Handbook of Mathematical Functions, eq. 25.4.29); the zeros found
+//! by Newton's method on the three-term Legendre recurrence (common practice).
+//!
 //! Tolerance policy (one place): relative errors for quantities that scale, absolute only near
 //! zero. Tests use these constants; a test that needs another bound says why beside it.
 

@@ -6,6 +6,10 @@
 //! width toward π/2 until the last panel is no wider than ρ; each panel uses Gauss–Legendre.
 //! The result is computed with two rules (24 and 32 nodes) and must agree, otherwise the
 //! computation is reported as non-convergent.
+//!
+//! No formula of its own: the integrands and their sources are in `kerr.rs` and
+//! `reissner_nordstrom.rs`; the panels use Gauss–Legendre rules (`crate::numeric`, Abramowitz &
+//! Stegun 1964, eq. 25.4.29).
 
 use crate::error::InputError;
 use crate::numeric::gauss_legendre;

@@ -1,5 +1,8 @@
 //! Ray paths in the lens plane, for drawing a fan of impact parameters.
 //!
+//! Sources: Carter's separated geodesic equations (Carter 1968, Phys. Rev. 174, 1559) in Mino
+//! time (Mino 2003, arXiv:gr-qc/0302075); classical fourth-order Runge–Kutta (common practice).
+//!
 //! The orbit equations are integrated for s = b/r in the parameter τ = b λ, with λ the Mino
 //! time (dτ_proper = r² dλ in the equatorial plane), where they are smooth through the turning
 //! point and well conditioned far from the lens (deflection sheet §2, Carter equations with

@@ -3,6 +3,10 @@
 //! Conventions (deflection sheet §0, §2): G = c = 1, lengths in units of M,
 //! f(r) = 1 − 2M/r + Q²/r² with Q in geometrized Gaussian units (SI: Q² → G Q²/(4π ε0 c⁴)),
 //! |Q| ≤ M (the extremal value is allowed). ε = M/b, q = Q/b. Only Q² enters.
+//!
+//! Sources: the metric is Reissner 1916 and Nordström 1918; its photon sphere and light deflection
+//! as used here agree with Eiroa, Romero & Torres 2002, arXiv:gr-qc/0203049 (recalled; the sheet's
+//! forms are the ones verified by the tests).
 
 use super::quadrature::{singularity_distance, theta_integral};
 use super::Deflection;

@@ -1,4 +1,8 @@
 //! α against b for plots: exact value and every weak-field partial sum on a log-spaced grid.
+//!
+//! No formula of its own: each value comes from `deflection::strong` and `deflection::series`,
+//! whose doc comments give the sources (Darwin 1959 and the weak-field series of the deflection
+//! sheet).
 
 use super::{series, strong, LightRequest, Metric};
 use crate::error::{positive, InputError};

@@ -3,6 +3,9 @@
 //! γ = u1·u2, p∞ = √(γ² − 1), ν = m1 m2/M², h = Γ = E/M = √(1 + 2ν(γ − 1)),
 //! p = |p_CM| = ν p∞/h, J = p b, j = J/(G m1 m2) = p∞ b/h (b in units of GM/c²).
 //! γ − 1 is carried separately so that slow encounters (v ≪ 1) keep their digits.
+//!
+//! Sources: these are the standard definitions of the PM literature, e.g. Damour 2016,
+//! arXiv:1609.00354 (h = E/M and j = J/(G m1 m2) as used there); encounter sheet §0.
 
 use crate::error::InputError;
 use serde::Serialize;

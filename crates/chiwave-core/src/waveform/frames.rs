@@ -1,7 +1,9 @@
 //! The two-body system, the two frames, observer directions and the boost map between frames.
 //!
 //! Sources: waveform reference sheet §0 (frames, polarisation basis, the Doppler factor δ and the
-//! polarisation rotation ψ from the Lorentz invariance of h_{μν} m^μ m^ν, origin shift rule of §8).
+//! polarisation rotation ψ from the Lorentz invariance of h_{μν} m^μ m^ν, origin shift rule of §8);
+//! the boost, aberration and Doppler factor are the textbook Lorentz kinematics (Rybicki &
+//! Lightman 1979, Radiative Processes in Astrophysics, ch. 4).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]

@@ -9,6 +9,10 @@
 //! against the time domain by Parseval's theorem and against the memory at ω → 0, see tests).
 //! dE/(dω dΩ) = D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (sheet §1). In a boosted frame,
 //! dE'/(dω' dΩ') = δ² |ḣ̃_A(ω'/δ)|²/(16π²).
+//!
+//! Sources: the two Fourier integrals are Gradshteyn & Ryzhik 3.754.2 and its b-derivative
+//! (recalled); the ω → 0 limit is Smarr 1977 (PRD 15, 2069); the angle-integrated ZFL closed form
+//! is Di Vecchia, Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (waveform sheet §3).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]
