@@ -4,7 +4,6 @@
 
 use crate::heatmap::Heat;
 use chiwave_core::error::InputError;
-use chiwave_core::waveform::SpectrumSi;
 use crate::{palette, Axis, Dash, Figure, LegendAt, Markers, Series, Style};
 
 fn line(label: impl Into<String>, xs: &[f64], ys: &[f64], style: Style) -> Series {
@@ -250,20 +249,8 @@ pub fn sky(d: &SkyData) -> Figure {
     fig
 }
 
-/// Inputs of the spectrum figure (geometric values; `si` converts them for the plot).
-#[derive(Debug, Clone, PartialEq)]
-pub struct SpectrumData<'a> {
-    pub omega: &'a [f64],
-    pub de_domega_dsolid: &'a [f64],
-    pub de_domega: Option<&'a [f64]>,
-    /// ω → 0 limit in the observer direction (from the memory).
-    pub zfl_direction: f64,
-    /// ω → 0 limit over the sphere (closed form); ≤ 0 for none.
-    pub zfl_closed: f64,
-    /// The core's SI factors (`chiwave_core::waveform::spectrum_si`): when given, the axes are
-    /// frequency in Hz and dE/df in J/Hz.
-    pub si: Option<SpectrumSi>,
-}
+/// Inputs of the spectrum figure: the core's curves (geometric; `si` converts them for the plot).
+pub type SpectrumData<'a> = chiwave_core::waveform::SpectrumCurves<'a>;
 
 /// dE/(dω dΩ) and dE/dω against ω on log axes (or dE/(df dΩ), dE/df against f in SI), with the
 /// zero-frequency limits marked as dotted levels.

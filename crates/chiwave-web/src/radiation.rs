@@ -109,15 +109,7 @@ impl RadiationJob {
     /// # Errors
     /// A JS `Error` with `kind = "plot"` for a drawing failure.
     pub fn spectrum_figure(&self) -> Result<JsValue, js_sys::Error> {
-        let s = self.inner.spectrum();
-        let fig = figures_radiation::spectrum(&figures_radiation::SpectrumData {
-            omega: s.omega,
-            de_domega_dsolid: s.de_domega_dsolid,
-            de_domega: s.de_domega,
-            zfl_direction: s.zfl_direction,
-            zfl_closed: s.zfl_closed,
-            si: s.si,
-        });
+        let fig = figures_radiation::spectrum(&self.inner.spectrum());
         let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
         to_js(&r)
     }

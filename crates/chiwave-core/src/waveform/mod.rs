@@ -61,7 +61,7 @@ pub use frames::{Binary, Frame};
 pub use kernel::{constant_piece, waveform, DirectionWaveform, Strain, DEFAULT_X_NODES};
 pub use memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 pub use observer::{antenna_pattern, characteristic_frequency, spectrum_si, strain_unit, PhysicalScales, SpectrumSi};
-pub use progressive::{JobSpectrum, RadiationJob, RadiationPhase, RadiationSnapshot};
+pub use progressive::{RadiationJob, RadiationPhase, RadiationSnapshot, SpectrumCurves};
 pub use quadrupole::quadrupole_hyperbola;
 pub use request::{
     DetectorOptions, DetectorResult, GravitySystem, EmPhysicalResult, EmSpectrumResult, EmWaveformResult, GravityWaveformResult,

@@ -265,8 +265,8 @@ impl RadiationJob {
     /// sphere once that phase is done (None before), and the two ω → 0 limits: from the memory
     /// in the observer direction (Smarr 1977) and the closed form over the sphere (Di Vecchia
     /// et al. 2021, prefactor 2GQ²/π; sheet §3).
-    pub fn spectrum(&self) -> JobSpectrum<'_> {
-        JobSpectrum {
+    pub fn spectrum(&self) -> SpectrumCurves<'_> {
+        SpectrumCurves {
             omega: self.spectrum.omega(),
             de_domega_dsolid: &self.direction_spectrum,
             de_domega: if self.spectrum.done() { Some(self.spectrum.values()) } else { None },
@@ -280,15 +280,21 @@ impl RadiationJob {
 /// Number of directions of [`SPECTRUM_SKY`] (2 hemispheres × n_polar × n_azimuth/2).
 const SPECTRUM_SKY_CELLS: usize = SPECTRUM_SKY.n_polar * SPECTRUM_SKY.n_azimuth;
 
-/// Spectrum arrays of a [`RadiationJob`] (borrowed).
+/// The curves of a spectrum (borrowed; geometric values, G = c = 1, units of M): what
+/// [`RadiationJob::spectrum`] returns and what the spectrum figure draws.
 #[derive(Debug, Clone, Copy, PartialEq)]
-pub struct JobSpectrum<'a> {
+pub struct SpectrumCurves<'a> {
+    /// Angular frequency ω, units of c³/(GM).
     pub omega: &'a [f64],
+    /// dE/(dω dΩ) in the observer direction (D² absorbed).
     pub de_domega_dsolid: &'a [f64],
+    /// dE/dω over the sphere, when computed.
     pub de_domega: Option<&'a [f64]>,
+    /// ω → 0 limit in the observer direction (from the memory, Smarr 1977).
     pub zfl_direction: f64,
+    /// ω → 0 limit over the sphere (closed form); ≤ 0 for none.
     pub zfl_closed: f64,
-    /// SI factors, when the masses are physical.
+    /// SI factors ([`spectrum_si`]), when the masses are physical: the figure then uses Hz and J/Hz.
     pub si: Option<SpectrumSi>,
 }
 
