@@ -239,9 +239,9 @@ pub fn waveform_system(r: &WaveformRequest) -> Result<(GravityWaveformResult, Bi
             })
         }
     };
-    let sys = Binary::new(res.m1_over_m, res.m2_over_m, res.gamma, res.b_over_m)?;
-    let au = r.angle_unit.unwrap_or(AngleUnit::Rad).radians();
-    Ok((res, sys, (r.theta * au, r.phi * au)))
+    // The request's own validated system and direction (no second reading of the angles here).
+    let g = r.gravity_system()?;
+    Ok((res, g.binary, g.observer))
 }
 
 /// Frame caption for figure titles.

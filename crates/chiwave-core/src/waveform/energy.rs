@@ -254,6 +254,11 @@ impl SkyIntegrator {
         self.cells.len()
     }
 
+    /// Number of sky cells integrated so far.
+    pub fn cells_done(&self) -> usize {
+        self.next
+    }
+
     /// Integrates up to `max_cells` more cells and returns the progress.
     pub fn step(&mut self, max_cells: usize) -> SkyProgress {
         let end = self.next.saturating_add(max_cells).min(self.cells.len());
@@ -321,9 +326,7 @@ pub fn sky_map(
     n_phi: usize,
 ) -> Result<SkyMap, InputError> {
     check_sky_grid(n_theta, n_phi)?;
-    let pi = std::f64::consts::PI;
-    let theta: Vec<f64> = (0..n_theta).map(|i| (i as f64 + 0.5) * pi / n_theta as f64).collect();
-    let phi: Vec<f64> = (0..n_phi).map(|j| -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64).collect();
+    let (theta, phi) = sky_axes(n_theta, n_phi);
     let mut values = Vec::with_capacity(n_theta);
     for i in 0..n_theta {
         values.push(sky_map_row(sys, frame, quantity, n_theta, n_phi, i)?);
@@ -364,6 +367,22 @@ pub(crate) fn check_sky_grid(n_theta: usize, n_phi: usize) -> Result<(), InputEr
     Ok(())
 }
 
+/// Polar angle of the centre of θ row `i` of an `n_theta`-row sky map: (i + ½)π/n_theta.
+fn cell_theta(n_theta: usize, i: usize) -> f64 {
+    (i as f64 + 0.5) * std::f64::consts::PI / n_theta as f64
+}
+
+/// Azimuth of the centre of φ column `j` of an `n_phi`-column sky map: −π + (j + ½)2π/n_phi.
+fn cell_phi(n_phi: usize, j: usize) -> f64 {
+    let pi = std::f64::consts::PI;
+    -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64
+}
+
+/// The cell-centre angles (θ by row, φ by column) of an `n_theta` × `n_phi` sky map.
+pub(crate) fn sky_axes(n_theta: usize, n_phi: usize) -> (Vec<f64>, Vec<f64>) {
+    ((0..n_theta).map(|i| cell_theta(n_theta, i)).collect(), (0..n_phi).map(|j| cell_phi(n_phi, j)).collect())
+}
+
 /// One cell (θ row `i`, φ column `j`) of [`sky_map`]; the grid sizes are checked by the callers.
 pub(crate) fn sky_cell(
     sys: &Binary,
@@ -374,10 +393,7 @@ pub(crate) fn sky_cell(
     i: usize,
     j: usize,
 ) -> Result<f64, InputError> {
-    let pi = std::f64::consts::PI;
-    let th = (i as f64 + 0.5) * pi / n_theta as f64;
-    let ph = -pi + (j as f64 + 0.5) * 2.0 * pi / n_phi as f64;
-    let w = DirectionWaveform::new(sys, frame, th, ph, DEFAULT_X_NODES)?;
+    let w = DirectionWaveform::new(sys, frame, cell_theta(n_theta, i), cell_phi(n_phi, j), DEFAULT_X_NODES)?;
     Ok(match quantity {
         SkyQuantity::EnergyPerSolidAngle => fluence(&w, 32),
         SkyQuantity::Memory => {

@@ -6,7 +6,7 @@
 //! ([`SkyIntegrator::run`], [`sky_map`](super::sky_map), [`spectrum_angle_integrated`](super::spectrum_angle_integrated)),
 //! cut into steps (tests below check that the results agree exactly).
 
-use super::energy::{check_sky_grid, radiated_closed_form, sky_cell, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
+use super::energy::{check_sky_grid, radiated_closed_form, sky_axes, sky_cell, RadiatedClosed, SkyIntegrator, SkyOptions, SkyQuantity};
 use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
 use super::observer::{spectrum_si, SpectrumSi};
@@ -139,10 +139,6 @@ impl RadiationJob {
         })
     }
 
-    fn map_cells_done(&self) -> usize {
-        self.map_cells.len()
-    }
-
     /// The current phase.
     pub fn phase(&self) -> RadiationPhase {
         if !self.balance.progress().done {
@@ -198,9 +194,8 @@ impl RadiationJob {
     pub fn snapshot(&self) -> RadiationSnapshot {
         let b = self.balance.progress();
         let total_map = self.n_theta * self.n_phi;
-        let spec_cells = ((self.spectrum.fraction()) * SPECTRUM_SKY_CELLS as f64).round() as usize;
-        let cells_total = self.balance.cells() + total_map + SPECTRUM_SKY_CELLS;
-        let cells_done = (b.fraction * self.balance.cells() as f64).round() as usize + self.map_cells_done() + spec_cells;
+        let cells_total = self.balance.cells() + total_map + self.spectrum.cells();
+        let cells_done = self.balance.cells_done() + self.map_cells.len() + self.spectrum.cells_done();
         let e = self.closed.energy;
         let (rel, prel) = if b.done {
             let dp = (0..3).map(|k| (b.momentum[k] - self.closed.momentum[k]).powi(2)).sum::<f64>().sqrt();
@@ -213,7 +208,7 @@ impl RadiationJob {
             phase,
             fraction: if phase == RadiationPhase::Done { 1.0 } else { cells_done as f64 / cells_total as f64 },
             balance_fraction: b.fraction,
-            map_fraction: self.map_cells_done() as f64 / total_map as f64,
+            map_fraction: self.map_cells.len() as f64 / total_map as f64,
             spectrum_fraction: self.spectrum.fraction(),
             done: phase == RadiationPhase::Done,
             e_rad_flux: b.energy,
@@ -232,9 +227,7 @@ impl RadiationJob {
 
     /// The sky map so far: cells not computed yet are NaN.
     pub fn sky_map(&self) -> SkyMap {
-        let pi = std::f64::consts::PI;
-        let theta = (0..self.n_theta).map(|i| (i as f64 + 0.5) * pi / self.n_theta as f64).collect();
-        let phi = (0..self.n_phi).map(|j| -pi + (j as f64 + 0.5) * 2.0 * pi / self.n_phi as f64).collect();
+        let (theta, phi) = sky_axes(self.n_theta, self.n_phi);
         let values = (0..self.n_theta)
             .map(|i| (0..self.n_phi).map(|j| self.map_cells.get(i * self.n_phi + j).copied().unwrap_or(f64::NAN)).collect())
             .collect();
@@ -276,9 +269,6 @@ impl RadiationJob {
         }
     }
 }
-
-/// Number of directions of [`SPECTRUM_SKY`] (2 hemispheres × n_polar × n_azimuth/2).
-const SPECTRUM_SKY_CELLS: usize = SPECTRUM_SKY.n_polar * SPECTRUM_SKY.n_azimuth;
 
 /// The curves of a spectrum (borrowed; geometric values, G = c = 1, units of M): what
 /// [`RadiationJob::spectrum`] returns and what the spectrum figure draws.

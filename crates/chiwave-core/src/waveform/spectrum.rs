@@ -183,6 +183,16 @@ impl SkySpectrum {
         self.step(usize::MAX).map(|_| ())
     }
 
+    /// Number of sky cells in all.
+    pub fn cells(&self) -> usize {
+        self.cells.len()
+    }
+
+    /// Number of sky cells added so far.
+    pub fn cells_done(&self) -> usize {
+        self.next
+    }
+
     /// Fraction of the sky cells done, in [0, 1].
     pub fn fraction(&self) -> f64 {
         if self.cells.is_empty() {
