@@ -71,7 +71,7 @@ try {
     }
     const med = (a) => { const s = [...a].sort((x, y) => x - y); return s[s.length >> 1]; };
     // The progressive job on its own, stepped as the page steps it (9 ms budget per frame).
-    const job = new window.chiwave.RadiationJob({ kind: 'waveform', m1: '12 Msun', m2: '7 Msun', v: 0.3, b: 600, theta: 60, phi: 30, angle_unit: 'deg', frame: 'cm', u_min: -8, u_max: 8, u_unit: 'b_over_v', samples: 1200 }, 'energy', 'cylindrical');
+    const job = new window.chiwave.RadiationJob({ kind: 'waveform', m1: '12 Msun', m2: '7 Msun', v: 0.3, b: 600, theta: 60, phi: 30, angle_unit: 'deg', frame: 'cm', u_min: -8, u_max: 8, u_unit: 'b_over_v', samples: 1200 }, 'energy');
     let longest = 0, steps = 0;
     const t0 = performance.now();
     while (!job.done()) {

@@ -14,19 +14,17 @@ use wasm_bindgen::prelude::*;
 #[wasm_bindgen]
 pub struct RadiationJob {
     inner: waveform::RadiationJob,
-    projection: Projection,
 }
 
 #[wasm_bindgen]
 impl RadiationJob {
     /// Starts the sky work for a waveform request: `map` is `"energy"` (dE/dΩ) or `"memory"`
-    /// (|DΔh|), `projection` is `"cylindrical"` or `"equal_area"`.
+    /// (|DΔh|).
     ///
     /// # Errors
-    /// A JS `Error` naming the field: the request's own fields (`force` for em), `map`, or
-    /// `projection`.
+    /// A JS `Error` naming the field: the request's own fields (`force` for em) or `map`.
     #[wasm_bindgen(constructor)]
-    pub fn new(request: JsValue, map: &str, projection: &str) -> Result<RadiationJob, js_sys::Error> {
+    pub fn new(request: JsValue, map: &str) -> Result<RadiationJob, js_sys::Error> {
         let req = match crate::read_request(request)? {
             Request::Waveform(r) => r,
             _ => return Err(js_error("request", "kind", "kind: RadiationJob needs a request of kind 'waveform'")),
@@ -38,12 +36,11 @@ impl RadiationJob {
                 return Err(js_error("input", "map", &format!("map: unknown sky quantity '{other}'; use energy or memory")))
             }
         };
-        let projection = Projection::parse("projection", projection).map_err(|e| input_error(&e))?;
         let sys = req.gravity_system().map_err(|e| input_error(&e))?.binary;
         let omega = scene::spectrum_omegas(&sys).map_err(|e| input_error(&e))?;
         let inner = waveform::RadiationJob::new(&req, quantity, SKY_N_THETA, SKY_N_PHI, &omega)
             .map_err(|e| input_error(&e))?;
-        Ok(RadiationJob { inner, projection })
+        Ok(RadiationJob { inner })
     }
 
     /// Works for about `budget_ms` milliseconds (one direction at a time, so a step
@@ -78,12 +75,14 @@ impl RadiationJob {
         self.inner.phase() == waveform::RadiationPhase::Done
     }
 
-    /// The sky map as far as it is computed (blank rows not yet done), rendered
-    /// (`{svg, frame, series}`).
+    /// The sky map as far as it is computed (cells not yet done are blank), rendered in
+    /// `projection` (`"cylindrical"` or `"equal_area"`; a change of projection needs no new job)
+    /// as `{svg, frame, series, heat}`.
     ///
     /// # Errors
-    /// A JS `Error` with `kind = "plot"` for a drawing failure.
-    pub fn sky_figure(&self) -> Result<JsValue, js_sys::Error> {
+    /// A JS `Error` naming `projection`, or with `kind = "plot"` for a drawing failure.
+    pub fn sky_figure(&self, projection: &str) -> Result<JsValue, js_sys::Error> {
+        let projection = Projection::parse("projection", projection).map_err(|e| input_error(&e))?;
         let map = self.inner.sky_map();
         let kind = match self.inner.quantity() {
             SkyQuantity::EnergyPerSolidAngle => SkyKind::Energy,
@@ -96,7 +95,7 @@ impl RadiationJob {
             kind,
             observer: Some(self.inner.observer()),
             frame: scene::frame_caption(self.inner.frame()),
-            projection: self.projection,
+            projection,
             mc2_j: self.inner.mc2_j(),
         });
         let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;

@@ -19,7 +19,7 @@ const REQ: &str = r#"{"kind":"waveform","m1":1,"m2":2,"gamma":1.3,"b":50,"theta"
 #[wasm_bindgen_test]
 fn job_steps_to_the_same_balance_as_evaluate() {
     let req = JSON::parse(REQ).expect("json");
-    let mut job = RadiationJob::new(req.clone(), "energy", "equal_area").expect("job starts");
+    let mut job = RadiationJob::new(req.clone(), "energy").expect("job starts");
     let first = job.step(0.0).expect("one chunk");
     assert_eq!(get(&first, "done").as_bool(), Some(false));
     assert_eq!(get(&first, "phase").as_string().as_deref(), Some("balance"));
@@ -39,7 +39,7 @@ fn job_steps_to_the_same_balance_as_evaluate() {
     assert_eq!(a, b, "progressive {a} vs one-shot {b}");
     // Balance against Herrmann et al. 2021 (arXiv:2101.07255) via e_rad_closed.
     assert!(get(&snap, "e_rad_rel_diff").as_f64().unwrap_or(1.0) < 1e-10);
-    let sky = job.sky_figure().expect("sky figure");
+    let sky = job.sky_figure("equal_area").expect("sky figure");
     assert!(get(&sky, "svg").as_string().unwrap_or_default().contains("cos θ"));
     let spec = job.spectrum_figure().expect("spectrum figure");
     assert!(get(&spec, "svg").as_string().unwrap_or_default().contains("over the sphere"));
@@ -48,12 +48,13 @@ fn job_steps_to_the_same_balance_as_evaluate() {
 #[wasm_bindgen_test]
 fn job_errors_name_the_field() {
     let req = JSON::parse(REQ).expect("json");
-    let e: JsValue = RadiationJob::new(req.clone(), "flux", "cylindrical").err().expect("bad map").into();
+    let e: JsValue = RadiationJob::new(req.clone(), "flux").err().expect("bad map").into();
     assert_eq!(get(&e, "field").as_string().as_deref(), Some("map"));
-    let e: JsValue = RadiationJob::new(req, "energy", "mercator").err().expect("bad projection").into();
+    let job = RadiationJob::new(req, "energy").expect("job starts");
+    let e: JsValue = job.sky_figure("mercator").expect_err("bad projection").into();
     assert_eq!(get(&e, "field").as_string().as_deref(), Some("projection"));
     let em = JSON::parse(&REQ.replace(r#""kind":"waveform","#, r#""kind":"waveform","force":"em","q1":0.1,"q2":0.1,"#)).expect("json");
-    let e: JsValue = RadiationJob::new(em, "energy", "cylindrical").err().expect("gravity only").into();
+    let e: JsValue = RadiationJob::new(em, "energy").err().expect("gravity only").into();
     assert_eq!(get(&e, "field").as_string().as_deref(), Some("force"));
     assert!(figure_names("waveform").contains(&"em_field".to_string()));
 }

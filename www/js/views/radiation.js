@@ -4,7 +4,7 @@
 // progressive `RadiationJob`) and carries its source on hover/focus. No physics here.
 import { el, fmt, exact, download, csv } from '../util.js';
 import { plotCard } from '../plot.js';
-import { controls, perFrame, select, num, splitQ, ensureOption, badge, numCell, table, showFieldErrors, flagTable, cautionItems } from '../controls.js';
+import { controls, perFrame, select, num, splitQ, ensureOption, numCell, table, showFieldErrors, flagTable, cautionItems } from '../controls.js';
 
 const ID = 'radiation';
 const { field, input } = controls(ID);
@@ -109,7 +109,9 @@ function makeRadiation(core) {
       'A bare b is in GM/c² with M = m₁ + m₂.'));
   const inputs = [force, m1, m2, m1u, m2u, speed, speedU, bIn, bU, theta, phi, frame, dist, distU, uFrom, uTo, winU, samples, detOn, dTheta, dPhi, dPsi, q1, q2, q1u, q2u];
   for (const c of inputs) { c.addEventListener('input', schedule); c.addEventListener('change', schedule); }
-  for (const c of [skyQ, proj]) c.addEventListener('change', () => { if (lastGood) startJob(lastGood.request); });
+  // A new sky quantity needs a new map; a new projection only redraws the one there is.
+  skyQ.addEventListener('change', () => { if (lastGood) startJob(lastGood.request); });
+  proj.addEventListener('change', () => { if (job) show(skyCard, () => job.sky_figure(proj.value)); });
   const inputsCard = el('section', { class: 'card', 'aria-labelledby': `${ID}-in-h` },
     el('h2', { id: `${ID}-in-h` }, 'Inputs ', el('span', { class: 'sub', text: '(recomputed as you type)' })), form);
 
@@ -383,7 +385,7 @@ function makeRadiation(core) {
     stopJob();
     balanceCard.hidden = false;
     try {
-      job = new core.RadiationJob(req, skyQ.value, proj.value);
+      job = new core.RadiationJob(req, skyQ.value);
     } catch (e) {
       progressText.textContent = e && e.message ? e.message : String(e);
       return;
@@ -393,7 +395,7 @@ function makeRadiation(core) {
     let skyDrawn = 0;
     root.dataset.skyDone = 'false';
     show(specCard, () => job.spectrum_figure());
-    show(skyCard, () => job.sky_figure());
+    show(skyCard, () => job.sky_figure(proj.value));
     const tick = () => {
       if (gen !== jobGen || !job) return;
       let snap;
@@ -408,7 +410,7 @@ function makeRadiation(core) {
       // Redraw the map as rows arrive, at most ~8 times a second, and once when it completes.
       if (snap.map_fraction !== lastSky && (snap.map_fraction === 1 || now - skyDrawn > 120)) {
         lastSky = snap.map_fraction; skyDrawn = now;
-        show(skyCard, () => job.sky_figure());
+        show(skyCard, () => job.sky_figure(proj.value));
       }
       if (snap.done) {
         show(specCard, () => job.spectrum_figure());
