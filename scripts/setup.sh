@@ -3,8 +3,9 @@
 # pays seconds. Nothing here downloads a prebuilt binary or a browser from outside the package
 # registries: the wasm-bindgen CLI is built from crates.io, Chromium comes from Debian.
 #
-#   scripts/setup.sh            build needs: wasm32 target, wasm-bindgen CLI
-#   scripts/setup.sh --browser  also Debian's chromium + chromium-driver and the npm packages
+#   scripts/setup.sh            build needs: wasm32 target, wasm-bindgen CLI, the npm packages
+#                               (esbuild bundles the page; playwright-core drives the browser tests)
+#   scripts/setup.sh --browser  also Debian's chromium + chromium-driver
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
@@ -29,21 +30,23 @@ if [ "$have" != "$want" ]; then
   cargo install wasm-bindgen-cli --version "$want"
 fi
 
+# 3. npm packages from package-lock.json (esbuild with its @esbuild/linux-x64 binary package, and
+#    playwright-core, which downloads no browser). A stamp skips `npm ci` while the lock is unchanged.
+if [ -f package-lock.json ]; then
+  stamp=node_modules/.chiwave-lock
+  if [ ! -f "$stamp" ] || ! cmp -s package-lock.json "$stamp" || [ ! -x node_modules/.bin/esbuild ]; then
+    say "npm ci"
+    npm ci --no-audit --no-fund --loglevel=error
+    cp package-lock.json "$stamp"
+  fi
+fi
+
 if [ "${1:-}" = "--browser" ]; then
-  # 3. Debian's Chromium and its driver (same version), for the browser tests.
+  # 4. Debian's Chromium and its driver (same version), for the browser tests.
   if ! command -v chromium >/dev/null 2>&1 || ! command -v chromedriver >/dev/null 2>&1; then
     say "installing Debian's chromium and chromium-driver"
     as_root apt-get update -qq
     as_root env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium chromium-driver
-  fi
-  # 4. npm packages for the end-to-end tests (playwright-core only: it downloads no browser).
-  if [ -f package-lock.json ]; then
-    stamp=node_modules/.chiwave-lock
-    if [ ! -f "$stamp" ] || ! cmp -s package-lock.json "$stamp"; then
-      say "npm ci"
-      npm ci --no-audit --no-fund --loglevel=error
-      cp package-lock.json "$stamp"
-    fi
   fi
 fi
 say "ready"
