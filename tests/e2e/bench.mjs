@@ -5,11 +5,11 @@
 //     flags, both figures rendered in wasm and put into the DOM, plus the forced layout);
 //  3. one gravitational waveform of 2000 samples at one sky position through `evaluate`
 //     (no sky integral), to compare with `cargo bench -p chiwave-core --bench waveform`;
-//  4. the radiation view: recompute after an input change (evaluate, tables, strain and
-//     slow-motion figures, new RadiationJob), and the progressive sky work: total time to the
+//  4. the waveform view: recompute after an input change (evaluate, tables, strain and
+//     slow-motion figures, new waveform job), and the progressive sky work: total time to the
 //     end and the longest single step (what one animation frame spends on it).
 // Run after scripts/build-web.sh:  node tests/e2e/bench.mjs   (or npm run bench)
-import { launch, pageUrl } from './browser.mjs';
+import { launch, pageUrl } from './support.mjs';
 
 const browser = await launch();
 try {
@@ -58,9 +58,9 @@ try {
     return { best: times[0], median: times[times.length >> 1] };
   });
   const rad = await page.evaluate(async () => {
-    document.getElementById('tab-radiation').click();
-    const input = document.getElementById('f-radiation-b');
-    const view = document.getElementById('view-radiation');
+    document.getElementById('tab-waveform').click();
+    const input = document.getElementById('f-waveform-b');
+    const view = document.getElementById('view-waveform');
     const frame = () => new Promise((r) => requestAnimationFrame(() => r()));
     const inner = [];
     for (let i = 0; i < 30; i++) {
@@ -71,7 +71,8 @@ try {
     }
     const med = (a) => { const s = [...a].sort((x, y) => x - y); return s[s.length >> 1]; };
     // The progressive job on its own, stepped as the page steps it (9 ms budget per frame).
-    const job = new window.chiwave.RadiationJob({ kind: 'waveform', m1: '12 Msun', m2: '7 Msun', v: 0.3, b: 600, theta: 60, phi: 30, angle_unit: 'deg', frame: 'cm', u_min: -8, u_max: 8, u_unit: 'b_over_v', samples: 1200 }, 'energy');
+    const Job = window.chiwave.WaveformJob ?? window.chiwave.RadiationJob; // renamed in the core
+    const job = new Job({ kind: 'waveform', m1: '12 Msun', m2: '7 Msun', v: 0.3, b: 600, theta: 60, phi: 30, angle_unit: 'deg', frame: 'cm', u_min: -8, u_max: 8, u_unit: 'b_over_v', samples: 1200 }, 'energy');
     let longest = 0, steps = 0;
     const t0 = performance.now();
     while (!job.done()) {
@@ -85,8 +86,8 @@ try {
     return { recompute_median: med(inner), total, longest, steps };
   });
   console.log(`wasm waveform 2000 samples:     best ${wave.best.toFixed(3)} ms, median ${wave.median.toFixed(3)} ms`);
-  console.log(`radiation view recompute:       median ${rad.recompute_median.toFixed(2)} ms (sky work then runs progressively)`);
-  console.log(`radiation sky work (balance, 24×48 map, dE/dω): ${rad.total.toFixed(0)} ms in ${rad.steps} steps, longest step ${rad.longest.toFixed(2)} ms`);
+  console.log(`waveform view recompute:        median ${rad.recompute_median.toFixed(2)} ms (sky work then runs progressively)`);
+  console.log(`waveform sky work (balance, 24×48 map, dE/dω): ${rad.total.toFixed(0)} ms in ${rad.steps} steps, longest step ${rad.longest.toFixed(2)} ms`);
   console.log(`wasm sweep 1000 points:         best ${sweep.best.toFixed(3)} ms, median ${sweep.median.toFixed(3)} ms`);
   console.log(`light view recompute + redraw:  median ${redraw.recompute_median.toFixed(2)} ms (best ${redraw.recompute_best.toFixed(2)} ms) in JS+wasm`);
   console.log(`  input event → next frame incl. layout: median ${redraw.with_layout_median.toFixed(2)} ms (includes waiting for the frame)`);

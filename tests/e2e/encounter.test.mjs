@@ -3,54 +3,36 @@
 // synthetic, invented for this test: it is NOT numerical-relativity data.
 import { test, before, after } from 'node:test';
 import assert from 'node:assert/strict';
-import fs from 'node:fs';
 import path from 'node:path';
-import { launch, pageUrl, watch, repo, artifacts, cli } from './browser.mjs';
+import { openPage, settle, artifacts, cli } from './support.mjs';
 
-let browser, page, seen;
+let ui, page;
 const V = '#view-encounter';
 
 before(async () => {
-  assert.ok(fs.existsSync(path.join(repo, 'dist', 'chiwave.html')), 'dist/chiwave.html is missing: run scripts/build-web.sh');
-  fs.mkdirSync(artifacts, { recursive: true });
-  browser = await launch();
-  page = await browser.context.newPage();
-  page.setDefaultTimeout(8000);
-  seen = watch(page);
-  await page.goto(pageUrl());
-  await page.waitForSelector('body[data-ready="true"]', { timeout: 20000 });
-  await page.click('#tab-encounter');
-  await page.waitForSelector(`${V}:not([hidden])`);
+  ui = await openPage({ view: 'encounter' });
+  page = ui.page;
 });
 
 after(async () => {
-  if (browser) await browser.close();
+  if (ui) await ui.close();
 });
 
-/** The page recomputes on the next animation frame; wait for it. */
-const frame = () => page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
-
-async function type(selector, text) {
-  await page.fill(selector, text);
-  await frame();
-}
-
-async function pick(selector, value) {
-  await page.selectOption(selector, value);
-  await frame();
-}
+const type = (selector, text) => ui.fill(selector, text);
+const pick = (selector, value) => ui.pick(selector, value);
+const frame = () => settle(page);
 
 /** Enters the geometric case m1 = 1, m2 = 3, γ = 1.1, b = `b` GM/c². */
 async function geometricCase(b) {
   await pick('#f-encounter-force', 'gravity');
-  await pick('#f-encounter-mass-mode', 'masses');
-  await pick('#f-encounter-m1-unit', '');
-  await pick('#f-encounter-m2-unit', '');
+  await pick('#f-encounter-mass_mode', 'masses');
+  await pick('#f-encounter-m1_unit', '');
+  await pick('#f-encounter-m2_unit', '');
   await type('#f-encounter-m1', '1');
   await type('#f-encounter-m2', '3');
-  await pick('#f-encounter-speed-unit', 'gamma');
+  await pick('#f-encounter-speed_unit', 'gamma');
   await type('#f-encounter-speed', '1.1');
-  await pick('#f-encounter-orbit-unit', '');
+  await pick('#f-encounter-orbit_unit', '');
   await type('#f-encounter-orbit', String(b));
 }
 
@@ -62,14 +44,14 @@ test('encounter: χ(3PM) on the page equals the CLI value for m1 = 1, m2 = 3, γ
   assert.ok(Number.isFinite(chi) && chi > 0, `page shows χ = ${chi}`);
   assert.ok((await cell.getAttribute('data-source')).includes('arXiv'), 'χ(3PM) names its source');
   // the order table carries the same number, with its source, and all four orders
-  const cum = page.locator(`${V} [data-role="cum-3pm"]`);
+  const cum = page.locator(`${V} [data-key="cum-3pm"]`);
   assert.equal(Number(await cum.getAttribute('data-value')), chi);
   assert.equal(await page.locator(`${V} table[data-role="orders"] tr[data-order]`).count(), 4);
   for (const key of ['chi_newtonian', 'chi_test_body', 'chi_estimate']) {
-    assert.ok((await page.locator(`${V} [data-role="${key}"]`).getAttribute('data-source'))?.length > 10, `${key} shown with a source`);
+    assert.ok((await page.locator(`${V} [data-key="${key}"]`).getAttribute('data-source'))?.length > 10, `${key} shown with a source`);
   }
-  assert.equal(Number(await page.getAttribute(`${V} [data-role="gamma"]`, 'data-value')), 1.1);
-  assert.equal(Number(await page.getAttribute(`${V} [data-role="nu"]`, 'data-value')), 0.1875); // 3/16
+  assert.equal(Number(await page.getAttribute(`${V} [data-key="gamma"]`, 'data-value')), 1.1);
+  assert.equal(Number(await page.getAttribute(`${V} [data-key="nu"]`, 'data-value')), 0.1875); // 3/16
   // regime strip: PM parameter, capture proximity, velocity regime
   for (const k of ['pm_parameter', 'capture_proximity', 'velocity_regime']) {
     assert.equal(await page.locator(`${V} [data-role="regime"] [data-flag="${k}"]`).count(), 1, k);
@@ -91,10 +73,10 @@ test('encounter: χ(b) and orbit figures are drawn with labels and the capture b
   assert.match(orbSvg, /EOB effective radius/);
   assert.match(orbSvg, /body 1/);
   // j instead of b → the figure is drawn against j
-  await pick('#f-encounter-orbit-unit', 'j');
+  await pick('#f-encounter-orbit_unit', 'j');
   await type('#f-encounter-orbit', '45');
   assert.match(await page.locator('[data-plot="encounter-chi"] .plot-box svg').textContent(), /reduced angular momentum j/);
-  await pick('#f-encounter-orbit-unit', '');
+  await pick('#f-encounter-orbit_unit', '');
   await type('#f-encounter-orbit', '100');
 });
 
@@ -103,7 +85,7 @@ test('encounter: a captured case is shown as captured, not as an error', async (
   const banner = page.locator(`${V} [data-role="captured"]`);
   await banner.waitFor();
   assert.match(await banner.textContent(), /capture/i);
-  assert.equal(await page.getAttribute(`${V} [data-role="status"] [data-captured]`, 'data-captured'), 'true');
+  assert.equal(await page.getAttribute(`${V} [data-role="headline"] [data-captured]`, 'data-captured'), 'true');
   assert.equal(await page.locator(`${V} [data-error-for="b"]`).textContent(), '');
   assert.match(await page.locator('[data-plot="encounter-orbits"] .plot-box svg').textContent(), /capture/);
   await page.screenshot({ path: path.join(artifacts, 'encounter-captured.png'), fullPage: true });
@@ -122,14 +104,14 @@ test('encounter: bad input is named next to its field and keeps the last result'
 });
 
 test('encounter: physical units and the electromagnetic table', async () => {
-  await pick('#f-encounter-m1-unit', 'Msun');
-  await pick('#f-encounter-m2-unit', 'Msun');
-  await pick('#f-encounter-speed-unit', 'km/s');
+  await pick('#f-encounter-m1_unit', 'Msun');
+  await pick('#f-encounter-m2_unit', 'Msun');
+  await pick('#f-encounter-speed_unit', 'km/s');
   await type('#f-encounter-speed', '1300');
-  await pick('#f-encounter-orbit-unit', 'au');
+  await pick('#f-encounter-orbit_unit', 'au');
   await type('#f-encounter-orbit', '0.6');
   await page.locator(`${V} [data-role="chi-3pm"]`).waitFor();
-  assert.match(await page.locator(`${V} .enc-body`).textContent(), /Physical units[\s\S]*km\/s[\s\S]*kg m² s⁻¹/);
+  assert.match(await page.locator(`${V} .result-body`).textContent(), /Physical units[\s\S]*km\/s[\s\S]*kg m² s⁻¹/);
   await geometricCase(100);
   await pick('#f-encounter-force', 'em');
   await type('#f-encounter-q1', '0.2');
@@ -138,7 +120,7 @@ test('encounter: physical units and the electromagnetic table', async () => {
   await pl.waitFor();
   assert.ok(Number(await pl.getAttribute('data-value')) > 0, 'attractive charges deflect inward');
   assert.equal(await page.locator(`${V} table[data-role="orders"] tr[data-order]`).count(), 4);
-  assert.ok((await page.locator(`${V} [data-role="chi_test_exact"]`).getAttribute('data-source')).includes('Darwin'));
+  assert.ok((await page.locator(`${V} [data-key="chi_test_exact"]`).getAttribute('data-source')).includes('Darwin'));
   assert.match(await page.textContent(`${V} [data-role="plot-note"]`), /gravity only/);
   assert.ok(await page.locator('[data-plot="encounter-chi"]').isHidden(), 'no gravity figure under an em result');
   await page.screenshot({ path: path.join(artifacts, 'encounter-em.png'), fullPage: true });
@@ -153,7 +135,7 @@ test('encounter: pasted CSV (synthetic, invented) gives a comparison table and p
     '1.0225, 1.70, 0.25, 1.05, 0.04',
     '1.0225, 2.00, 0.25, 0.72, 0.03',
   ].join('\n');
-  await page.fill(`#encounter-nr-csv`, csv);
+  await page.fill(`#f-encounter-nr_csv`, csv);
   await frame();
   const rows = page.locator(`${V} table[data-role="nr-rows"] tbody tr`);
   await rows.first().waitFor();
@@ -164,15 +146,11 @@ test('encounter: pasted CSV (synthetic, invented) gives a comparison table and p
   assert.match(svg, /3PM/);
   await page.locator(`${V} [data-role="nr"]`).screenshot({ path: path.join(artifacts, 'encounter-nr.png') });
   // a malformed line is reported by the core with its line number
-  await page.fill(`#encounter-nr-csv`, `${csv}\n1.02, oops`);
+  await page.fill(`#f-encounter-nr_csv`, `${csv}\n1.02, oops`);
   await frame();
   assert.match(await page.locator(`${V} [data-role="nr-error"]`).textContent(), /csv.*line 6/);
-  await page.fill(`#encounter-nr-csv`, csv);
+  await page.fill(`#f-encounter-nr_csv`, csv);
   await frame();
 });
 
-test('encounter: no network requests and no console errors', async () => {
-  const bad = seen.requests.filter((u) => !/^(file|data|blob):/.test(u));
-  assert.deepEqual(bad, [], 'only file:, data: and blob: URLs');
-  assert.deepEqual(seen.errors, []);
-});
+test('encounter: no network requests and no console errors', () => ui.assertClean());

@@ -4,56 +4,38 @@ import { test, before, after } from 'node:test';
 import assert from 'node:assert/strict';
 import fs from 'node:fs';
 import path from 'node:path';
-import { execFileSync } from 'node:child_process';
-import { launch, pageUrl, watch, repo, artifacts } from './browser.mjs';
+import { openPage, settle, artifacts, cli } from './support.mjs';
 
-let browser, page, seen;
+let ui, page;
 
 before(async () => {
-  assert.ok(fs.existsSync(path.join(repo, 'dist', 'chiwave.html')), 'dist/chiwave.html is missing: run scripts/build-web.sh');
-  fs.mkdirSync(artifacts, { recursive: true });
-  browser = await launch();
-  page = await browser.context.newPage();
-  page.setDefaultTimeout(8000);
-  seen = watch(page);
-  await page.goto(pageUrl());
-  await page.waitForSelector('body[data-ready="true"]', { timeout: 20000 });
+  ui = await openPage();
+  page = ui.page;
 });
 
 after(async () => {
-  if (browser) await browser.close();
+  if (ui) await ui.close();
 });
 
-/** Sets a text input and fires the input event, as typing does. */
-async function type(selector, text) {
-  await page.fill(selector, text);
-  // The page recomputes on the next animation frame; wait for it.
-  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
-}
+const type = (selector, text) => ui.fill(selector, text);
 
 async function exactAlpha() {
   await page.waitForSelector('#view-light [data-role="alpha"]');
   return Number(await page.getAttribute('#view-light [data-role="alpha"]', 'data-value'));
 }
 
-/** The CLI's α for `light --b 10`, or null with a reason when the CLI cannot give it yet. */
+/** The CLI's α for `light --b 10`, or {why} when the CLI cannot give it. */
 function cliAlpha() {
-  const bin = ['release', 'debug'].map((p) => path.join(repo, 'target', p, 'chiwave')).find((p) => fs.existsSync(p));
-  const [cmd, args] = bin ? [bin, []] : ['cargo', ['run', '-q', '-p', 'chiwave-cli', '--']];
-  try {
-    const out = execFileSync(cmd, [...args, 'light', '--b', '10', '--json'], { cwd: repo, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
-    const v = JSON.parse(out);
-    const a = v.alpha ?? (v.result && v.result.alpha);
-    return typeof a === 'number' ? { alpha: a } : { why: `CLI JSON has no numeric 'alpha': ${out.slice(0, 200)}` };
-  } catch (e) {
-    return { why: `CLI not usable: ${String(e.stderr || e.message).trim().split('\n').pop()}` };
-  }
+  const c = cli(['light', '--b', '10']);
+  if (c.why) return c;
+  const a = c.json.alpha ?? (c.json.result && c.json.result.alpha);
+  return typeof a === 'number' ? { alpha: a } : { why: `CLI JSON has no numeric 'alpha': ${JSON.stringify(c.json).slice(0, 200)}` };
 }
 
 test('light view: b = 10 (geometric) gives the same exact α as the CLI', async (t) => {
   await page.click('#tab-light');
-  await page.selectOption('#f-light-mass-unit', 'geometric');
-  await page.selectOption('#f-light-b-unit', 'M');
+  await page.selectOption('#f-light-mass_unit', 'geometric');
+  await page.selectOption('#f-light-b_unit', 'M');
   await type('#f-light-b', '10');
   const alpha = await exactAlpha();
   assert.ok(Number.isFinite(alpha) && alpha > 0, `page shows α = ${alpha}`);
@@ -61,14 +43,14 @@ test('light view: b = 10 (geometric) gives the same exact α as the CLI', async 
   const cell = page.locator('#view-light td.num[data-key="alpha"]');
   assert.equal(Number(await cell.getAttribute('data-value')), alpha);
   assert.ok((await cell.getAttribute('data-source'))?.length > 5, 'exact α has a source');
-  const cli = cliAlpha();
-  if (cli.why) {
-    t.skip(`comparison with the CLI skipped: ${cli.why}`);
+  const ref = cliAlpha();
+  if (ref.why) {
+    t.skip(`comparison with the CLI skipped: ${ref.why}`);
     return;
   }
   // Same core code on both sides: they must agree to the last bits (wasm f64 = native f64
   // up to libm differences, hence 1e-12 relative).
-  assert.ok(Math.abs(alpha - cli.alpha) <= 1e-12 * Math.abs(cli.alpha), `page ${alpha} vs CLI ${cli.alpha}`);
+  assert.ok(Math.abs(alpha - ref.alpha) <= 1e-12 * Math.abs(ref.alpha), `page ${alpha} vs CLI ${ref.alpha}`);
 });
 
 test('light view: both plots are drawn with axis labels', async () => {
@@ -137,7 +119,7 @@ test('scenario picker loads a built-in scenario', async () => {
   const stems = await page.locator('#scenario-pick option').evaluateAll((os) => os.map((o) => o.value).filter(Boolean));
   for (const stem of stems) {
     await page.selectOption('#scenario-pick', stem);
-    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
+    await settle(page);
     const marked = await page.evaluate(() => [...document.querySelectorAll('.view:not([hidden]) .field-error, .view:not([hidden]) .request-error')]
       .map((e) => e.textContent).filter(Boolean));
     assert.deepEqual(marked, [], `scenario ${stem}`);
@@ -155,8 +137,4 @@ test('lensing view renders', async () => {
   await page.screenshot({ path: path.join(artifacts, 'light.png'), fullPage: true });
 });
 
-test('no network requests and no console errors', async () => {
-  const bad = seen.requests.filter((u) => !/^(file|data|blob):/.test(u));
-  assert.deepEqual(bad, [], 'only file:, data: and blob: URLs');
-  assert.deepEqual(seen.errors, []);
-});
+test('no network requests and no console errors', () => ui.assertClean());

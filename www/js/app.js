@@ -1,7 +1,7 @@
 // Page start-up: load the core, build the tabs and views, scenarios (built-in and from a file).
 import { el, installTooltips, download } from './util.js';
 import { makeView } from './viewkit.js';
-import { loadCore } from './wasm.js';
+import { loadCore, info, checkScenario } from './core.js';
 import { VIEWS } from './views/index.js';
 import { SCENARIOS } from '../pkg/scenarios.js';
 
@@ -18,12 +18,17 @@ function say(text, isError = false) {
   note.classList.toggle('error', isError);
 }
 
+/** The view with id `id` or with `id` among its former ids (#view=radiation is the waveform view). */
+function viewFor(id) {
+  return views.get(id) || [...views.values()].find((v) => v.aliases.includes(id)) || null;
+}
+
 function activate(id, focus = false) {
-  const v = views.get(id);
+  const v = viewFor(id);
   if (!v) return;
   active = v;
   for (const [vid, view] of views) {
-    const on = vid === id;
+    const on = view === v;
     view.root.hidden = !on;
     const tab = document.getElementById(`tab-${vid}`);
     tab.setAttribute('aria-selected', on ? 'true' : 'false');
@@ -33,7 +38,7 @@ function activate(id, focus = false) {
 }
 
 function applyScenario(s, origin) {
-  const checked = window.chiwave.check_scenario(s);
+  const checked = checkScenario(s);
   const kind = checked.request.kind;
   const v = [...views.values()].find((x) => x.kind === kind);
   if (!v) throw Object.assign(new Error(`scenario: no view for kind '${kind}' in this page`), { field: 'kind' });
@@ -43,28 +48,29 @@ function applyScenario(s, origin) {
 }
 
 async function start() {
-  const core = await loadCore();
-  window.chiwave = core; // for the console, the bench page and the end-to-end test
-  const info = core.info();
-  document.getElementById('notice-text').textContent = info.notice;
-  document.getElementById('version').textContent = `chiwave ${info.version}`;
+  // The raw wasm module, for the console, the bench page and the end-to-end tests.
+  window.chiwave = await loadCore();
+  const facts = info();
+  document.getElementById('notice-text').textContent = facts.notice;
+  document.getElementById('version').textContent = `chiwave ${facts.version}`;
 
   for (const spec of VIEWS) {
-    // A view either declares fields for the shared machinery or builds itself (spec.make).
-    const view = spec.make ? spec.make(core) : makeView(spec, core);
+    const view = makeView(spec);
     views.set(spec.id, view);
     main.append(view.root);
     const tab = el('button', { type: 'button', role: 'tab', id: `tab-${spec.id}`, 'aria-controls': view.root.id, text: spec.title,
-      onclick: () => { activate(spec.id); view.recompute(); } });
+      onclick: () => { activate(spec.id); view.update(); } });
     tabs.append(tab);
   }
+  // The views' state (getState/setState), for the end-to-end tests and the console.
+  window.chiwavePage = { view: (id) => viewFor(id), get active() { return active; } };
   tabs.addEventListener('keydown', (e) => {
     const ids = [...views.keys()];
     const i = ids.indexOf(active.id);
     if (e.key === 'ArrowRight' || e.key === 'ArrowLeft') {
       const j = (i + (e.key === 'ArrowRight' ? 1 : ids.length - 1)) % ids.length;
       activate(ids[j], true);
-      views.get(ids[j]).recompute();
+      views.get(ids[j]).update();
       e.preventDefault();
     }
   });
@@ -102,15 +108,14 @@ async function start() {
     download(`chiwave-${active.id}-scenario.json`, JSON.stringify(s, null, 2), 'application/json');
   });
 
-  // #scenario=stem or #view=id
+  // #scenario=stem or #view=id (a former view id still works)
   const hash = new URLSearchParams(location.hash.slice(1));
-  const first = VIEWS[0].id;
-  activate(views.has(hash.get('view')) ? hash.get('view') : first);
-  for (const v of views.values()) v.recompute();
+  activate(viewFor(hash.get('view') || '') ? hash.get('view') : VIEWS[0].id);
+  for (const v of views.values()) v.update();
   const want = hash.get('scenario');
   if (want) {
     const s = SCENARIOS.find((x) => x.stem === want);
-    if (s) { pick.value = s.stem; applyScenario(s, 'Demo scenario'); } else say(`No built-in scenario '${want}'.`, true);
+    if (s) { pick.value = s.stem; applyScenario(s, 'Demo scenario'); } else say(`No built-in scenario '${want.slice(0, 40)}'.`, true);
   }
   document.body.dataset.ready = 'true';
 }

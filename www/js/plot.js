@@ -82,7 +82,17 @@ function heatAt(heat, x, y) {
   return el('span', { class: 'item', 'data-role': 'heat-readout' }, text);
 }
 
-/** Creates a plot card; returns {root, show(rendered), fail(message)}. */
+/** Parses the SVG text of a rendered figure into an element of this document (no innerHTML:
+ *  the XML parser runs no script, and a malformed figure is an error, not markup). */
+function svgElement(text) {
+  const doc = new DOMParser().parseFromString(text, 'image/svg+xml');
+  const svg = doc.documentElement;
+  if (!svg || svg.localName !== 'svg' || doc.querySelector('parsererror')) throw new Error('the figure is not valid SVG');
+  return document.importNode(svg, true);
+}
+
+/** Creates a plot card; returns {root, show(rendered), fail(message), fresh(), draw(outcome),
+ *  setTitle(text)}. */
 export function plotCard(title, fileStem) {
   const box = el('div', { class: 'plot-box', tabindex: '0', role: 'img', 'aria-label': title });
   const crossX = el('div', { class: 'cross-x' });
@@ -91,8 +101,9 @@ export function plotCard(title, fileStem) {
   const err = el('p', { class: 'plot-error', role: 'alert' });
   const svgBtn = el('button', { type: 'button', text: 'SVG', title: `Download “${title}” as SVG` });
   const pngBtn = el('button', { type: 'button', text: 'PNG', title: `Download “${title}” as PNG` });
+  const heading = el('h3', { text: title });
   const root = el('section', { class: 'card plot-card', 'data-plot': fileStem },
-    el('div', { class: 'plot-head' }, el('h3', { text: title }), el('div', { class: 'plot-tools' }, svgBtn, pngBtn)),
+    el('div', { class: 'plot-head' }, heading, el('div', { class: 'plot-tools' }, svgBtn, pngBtn)),
     box, readout, err);
   let current = null;
   let cursor = null; // [px, py] in SVG pixels, for keyboard moves
@@ -175,11 +186,16 @@ export function plotCard(title, fileStem) {
   return {
     root,
     show(rendered) {
+      let svg;
+      try {
+        svg = svgElement(rendered.svg);
+      } catch (e) {
+        this.fail(e.message);
+        return;
+      }
       current = rendered;
       err.textContent = '';
-      // The SVG comes from our own wasm renderer (text is escaped by the SVG backend).
-      box.innerHTML = rendered.svg;
-      box.append(crossX, crossY);
+      box.replaceChildren(svg, crossX, crossY);
       box.setAttribute('aria-label', `${title}: ${rendered.x_label} against ${rendered.y_label}`);
       if (cursor && box.classList.contains('hover')) point(...cursor);
     },
@@ -188,6 +204,20 @@ export function plotCard(title, fileStem) {
       box.classList.add('stale');
     },
     fresh() { box.classList.remove('stale'); },
+    /** Shows `{value: rendered}` or the message of `{error}`; a function is called for it first. */
+    draw(outcome) {
+      let o = outcome;
+      if (typeof o === 'function') {
+        try { o = { value: o() }; } catch (e) { o = { error: e && e.message ? e.message : String(e) }; }
+      }
+      if (o.error !== undefined) this.fail(o.error);
+      else { this.show(o.value); this.fresh(); }
+    },
+    setTitle(text) {
+      if (heading.textContent === text) return;
+      title = text;
+      heading.textContent = text;
+    },
     get rendered() { return current; },
   };
 }

@@ -1,188 +1,339 @@
-// The machinery every view shares: form → request → wasm evaluate → table + flags + figures,
-// recomputed on every input event (coalesced to one per animation frame). A view module only
-// declares its fields, how to lay out its result rows, and which figures to draw.
-import { el, fmt, exact, download, csv } from './util.js';
-import { buildForm } from './form.js';
+// The one view machinery. A view module declares a spec; makeView builds the inputs card, the
+// results card (headline slot, cautions, results tables, regime checks, CSV/JSON export), the
+// figures, the view's extra cards and its progressive work, and runs one update per input change
+// (coalesced to one per animation frame): state → request → one evaluation (core.evaluateView)
+// → headline, tables, figures, cards.
+//
+// Spec (every hook receives ctx = {request, values, result, angleUnit, A(rad), au, src(key…),
+// flags: {key: flag}, kit}):
+//   id, title, kind, aliases?: [old ids]     the view id is the #view= name
+//   intro?: text beside "Inputs"; inputs: field/group/note items (inputs.js)
+//   constants?: request fields always sent (e.g. an input angle unit)
+//   angles?: default output angle unit (the view then has an "angles in" select, state key `angles`)
+//   digits?: significant digits of table numbers (default 8)
+//   resultRequest?(request) → the request whose result is shown (default: request itself)
+//   headline(ctx) → Node | [Node]           the headline slot (the number a reader should look at)
+//   cautions?(ctx) → [li]                    banners before the flags' cautions
+//   body(ctx) → [table | {grid: [[block…]…]} | {note: text, title?}]   results (table.js models)
+//   figures?: [{stem, title, name, titleFor?, when?, work?}]   name may be a function of ctx,
+//              titleFor(ctx) retitles; `when(ctx)` false hides the figure; `work: true` figures
+//              are drawn by the progressive work, not by the evaluation
+//   figureNote?(ctx) → text shown above the figures
+//   cards?: [{id, place: 'results' | 'end', make(kit) → {root, render(ctx), stale?: bool}}]
+//   work?: {key(ctx) → string | null, start(ctx, kit) → {step(budgetMs) → done, refresh?(ctx), stop()}}
+//              work whose key is unchanged by an update keeps running (refresh redraws it);
+//              a new key stops the old work and starts new work, stepped once per animation frame
+//   csv?(last) → rows; json?(last, kit) → extra fields of the JSON export (csvTitle, jsonTitle: button tips)
+// State: getState() → {key: string} of every control (inputs, unit selects, modes, display
+// choices, card inputs); setState(map) sets them (unknown keys and values that are not options
+// are returned as problems) and updates.
+import { el, exact, download, csv } from './util.js';
+import { buildForm } from './inputs.js';
 import { plotCard } from './plot.js';
-import { perFrame } from './controls.js';
+import { renderTable, tableCsvRows, flagsTable, flagsCsvRows, cautionItems, levelOf } from './table.js';
+import { evaluateView, message, angle, angleLabel, angleUnits, sourceOf } from './core.js';
 
-export const ANGLE_UNITS = [
-  ['rad', 'rad'], ['deg', 'deg'], ['arcsec', 'arcsec'], ['mas', 'mas'], ['uas', 'µas'],
-];
-const RAD_PER = { rad: 1, deg: Math.PI / 180, arcsec: Math.PI / 648000, mas: Math.PI / 648000e3, uas: Math.PI / 648000e6 };
-const ANGLE_LABEL = { rad: 'rad', deg: 'deg', arcsec: 'arcsec', mas: 'mas', uas: 'µas' };
+/** Milliseconds of progressive work per animation frame (the rest of a 60 Hz frame draws). */
+export const WORK_BUDGET_MS = 9;
 
-/** Display conversion of an angle in radians (a unit change, not physics). */
-export function angle(rad, unit) {
-  return rad === null || rad === undefined ? null : rad / RAD_PER[unit];
-}
-export function angleLabel(unit) { return ANGLE_LABEL[unit]; }
-
-function levelOf(flags) {
-  const order = { ok: 0, caution: 1, invalid: 2 };
-  let worst = 'ok';
-  for (const f of flags || []) if ((order[f.level] ?? 0) > order[worst]) worst = f.level;
-  return worst;
-}
-
-/** Looks up a source text in the result's `sources` map by any of the given keys. */
-export function sourceOf(result, ...keys) {
-  const s = result && result.sources;
-  if (!s) return null;
-  for (const k of keys) if (k && s[k]) return typeof s[k] === 'string' ? s[k] : JSON.stringify(s[k]);
-  return null;
+/** Returns schedule(task): each distinct task runs once on the next animation frame, however
+ *  often it is asked for before then. */
+export function frameScheduler() {
+  const tasks = new Set();
+  let pending = false;
+  return (task) => {
+    tasks.add(task);
+    if (pending) return;
+    pending = true;
+    requestAnimationFrame(() => {
+      pending = false;
+      const run = [...tasks];
+      tasks.clear();
+      for (const t of run) t();
+    });
+  };
 }
 
-/**
- * spec: {
- *   id, title, kind, fields: [...form fields], angleOutput: bool,
- *   rows(result, ctx) -> [{section} | {label, value, unit, source, key}],
- *   status(result, ctx) -> Node | null     (headline under the title),
- *   figures: [{name, title, stem}],
- *   defaults: request object for first load,
- * }
- */
-export function makeView(spec, api) {
-  let lastGood = null; // {request, result, rows}
-  let angleUnit = spec.angleDefault || 'arcsec';
+/** A headline number: the shown text, the full double in data-value, its source on hover. */
+export function headNumber(role, value, shown, source, cls = 'big') {
+  return el('span', { class: cls, 'data-role': role, 'data-value': exact(value), tabindex: source ? '0' : null, 'data-source': source || null }, shown);
+}
 
-  const schedule = perFrame(() => recompute());
-  const form = buildForm(spec.fields.map((f) => ({ ...f, view: spec.id })), schedule);
-  const outUnit = el('select', { id: `${spec.id}-angle-unit`, 'aria-label': 'Output angle unit' });
-  for (const [v, l] of ANGLE_UNITS) outUnit.append(el('option', { value: v, text: l }));
-  outUnit.value = angleUnit;
-  outUnit.addEventListener('change', () => { angleUnit = outUnit.value; schedule(); });
+export function makeView(spec) {
+  const id = spec.id;
+  const digits = spec.digits || 8;
+  const schedule = frameScheduler();
+  const controls = new Map(); // state key → {key, get, set, reset, node?, apply?}
+  const parts = new Map(); // part name → element (figures, tables, cards), for showing one alone
+  let last = null; // {request, result, tables}
+  let work = null; // {key, handle, gen}
+  let workGen = 0;
 
-  const showSrc = el('input', { type: 'checkbox', id: `${spec.id}-show-src` });
-  const status = el('div', { class: 'status-line', 'data-role': 'status', 'aria-live': 'polite' });
+  const update = () => run();
+  const form = buildForm(id, spec.inputs, () => schedule(update));
+  for (const [k, c] of form.controls) controls.set(k, c);
+
+  // ---- results card ----
+  const tools = el('div', { class: 'result-tools' });
+  if (spec.angles) {
+    const sel = el('select', { id: `f-${id}-angles`, 'aria-label': 'Output angle unit' });
+    for (const u of angleUnits()) sel.append(el('option', { value: u.key, text: u.label }));
+    sel.value = spec.angles;
+    sel.addEventListener('change', () => schedule(update));
+    register(selectControl('angles', sel, spec.angles));
+    tools.append(el('label', { for: sel.id, text: 'angles in' }), sel);
+  }
+  const showSrc = el('input', { type: 'checkbox', id: `f-${id}-sources` });
+  const csvBtn = el('button', { type: 'button', text: 'CSV', title: spec.csvTitle || 'Download every number shown, with its source, as CSV' });
+  const jsonBtn = el('button', { type: 'button', text: 'JSON', title: spec.jsonTitle || 'Download the request and the full result as JSON' });
+  tools.append(el('label', { for: showSrc.id }, showSrc, ' sources'), csvBtn, jsonBtn);
   const staleNote = el('p', { class: 'stale-note', role: 'status' });
+  const headline = el('div', { class: 'status-line', 'data-role': 'headline', 'aria-live': 'polite' });
   const cautions = el('ul', { class: 'cautions', 'data-role': 'cautions' });
-  const tbody = el('tbody');
-  const table = el('table', { class: 'results', 'data-role': 'results' },
-    el('thead', {}, el('tr', {}, el('th', { text: 'Quantity' }), el('th', { text: 'Value', style: 'text-align:right' }),
-      el('th', { text: 'Unit' }), el('th', { text: 'Rel. error', style: 'text-align:right', title: 'relative difference to the exact value' }),
-      el('th', { class: 'src-col', text: 'Source' }))), tbody);
-  const flagBody = el('tbody');
-  const flagTable = el('table', { class: 'results flags', 'data-role': 'flags' },
-    el('thead', {}, el('tr', {}, el('th', { text: 'Regime check' }), el('th', { text: 'Level' }), el('th', { text: 'Value', style: 'text-align:right' }), el('th', { text: 'What it means' }))), flagBody);
+  const body = el('div', { class: 'result-body' });
+  const resultsCard = el('section', { class: 'card', 'aria-labelledby': `${id}-res-h`, 'data-part': 'results' },
+    el('div', { class: 'result-head' }, el('h2', { id: `${id}-res-h`, text: 'Results' }), tools),
+    staleNote, headline, cautions, body);
+  const applySources = () => resultsCard.classList.toggle('show-sources', showSrc.checked);
+  showSrc.addEventListener('change', applySources);
+  register({ key: 'sources', node: showSrc, get: () => String(showSrc.checked), set: (v) => setCheck(showSrc, v), reset() { showSrc.checked = false; }, apply: applySources });
 
-  const csvBtn = el('button', { type: 'button', text: 'CSV' , title: 'Download the results table as CSV' });
-  const jsonBtn = el('button', { type: 'button', text: 'JSON', title: 'Download the request and full result as JSON' });
-  const resultsCard = el('section', { class: 'card', 'aria-labelledby': `${spec.id}-res-h` },
-    el('div', { class: 'result-head' },
-      el('h2', { id: `${spec.id}-res-h`, text: 'Results' }),
-      el('div', { class: 'result-tools' },
-        spec.angleOutput ? el('label', { for: outUnit.id, text: 'angles in' }) : null, spec.angleOutput ? outUnit : null,
-        el('label', { for: showSrc.id }, showSrc, ' sources'), csvBtn, jsonBtn)),
-    staleNote, status, cautions, table,
-    el('h2', { text: 'Validity', style: 'margin-top:16px' }), flagTable);
-  showSrc.addEventListener('change', () => resultsCard.classList.toggle('show-sources', showSrc.checked));
+  // ---- figures ----
+  const figures = (spec.figures || []).map((f) => {
+    const card = plotCard(f.title, `${id}-${f.stem}`);
+    parts.set(f.stem, card.root);
+    return { spec: f, card };
+  });
+  const plotNote = el('p', { class: 'muted', 'data-role': 'plot-note', hidden: true });
+  const plots = el('div', { class: 'plots' }, figures.map((f) => f.card.root));
 
-  const plots = spec.figures.map((f) => ({ ...f, card: plotCard(f.title, `${spec.id}-${f.stem}`) }));
-  const inputsCard = el('section', { class: 'card', 'aria-labelledby': `${spec.id}-in-h` },
-    el('h2', { id: `${spec.id}-in-h` }, 'Inputs ', el('span', { class: 'sub', text: spec.inputsNote || '' })), form.root);
-  const outputs = el('div', { class: 'outputs' }, resultsCard, el('div', { class: 'plots' }, plots.map((p) => p.card.root)));
-  const root = el('section', { class: 'view', id: `view-${spec.id}`, role: 'tabpanel', 'aria-label': spec.title }, inputsCard, outputs);
+  // ---- the kit: what hooks may use ----
+  const kit = {
+    id,
+    schedule,
+    register,
+    figure: (stem) => figures.find((f) => f.spec.stem === stem).card,
+    card: (cid) => cards.find((c) => c.id === cid).made,
+    get values() { return getState(); },
+    get last() { return last; },
+    root: null,
+  };
 
+  // ---- extra cards ----
+  const cards = (spec.cards || []).map((c) => {
+    const made = c.make(kit);
+    parts.set(c.id, made.root);
+    return { ...c, made };
+  });
+  const placed = (where) => cards.filter((c) => (c.place || 'end') === where).map((c) => c.made.root);
 
-  function currentRequest() {
-    const r = form.read();
-    if (r.errors) return r;
-    return { request: { kind: spec.kind, ...r.fields } };
+  const inputsCard = el('section', { class: 'card', 'aria-labelledby': `${id}-in-h`, 'data-part': 'inputs' },
+    el('h2', { id: `${id}-in-h` }, 'Inputs ', el('span', { class: 'sub', text: spec.intro || '(recomputed as you type)' })), form.root);
+  const outputs = el('div', { class: 'outputs' }, resultsCard, placed('results'), plotNote, plots, placed('end'));
+  const root = el('section', { class: 'view', id: `view-${id}`, role: 'tabpanel', 'aria-label': spec.title }, inputsCard, outputs);
+  kit.root = root;
+  parts.set('results', resultsCard);
+  parts.set('inputs', inputsCard);
+
+  // ---- state ----
+  function register(c) { controls.set(c.key, c); }
+
+  function getState() {
+    const s = {};
+    for (const [k, c] of controls) s[k] = c.get();
+    return s;
   }
 
-  function markStale(message) {
-    if (lastGood) {
-      staleNote.textContent = message || 'Showing the last valid result; fix the marked input.';
-      table.classList.add('stale'); status.classList.add('stale');
-      for (const p of plots) p.card.root.classList.add('stale');
+  /** Sets the state (missing keys take their defaults); returns the keys and values it could
+   *  not use, each as a short message; updates the view. */
+  function setState(map, { update: now = true } = {}) {
+    const problems = [];
+    for (const c of controls.values()) c.reset();
+    for (const [k, v] of Object.entries(map || {})) {
+      const c = controls.get(k);
+      if (!c) problems.push(`unknown key '${String(k).slice(0, 40)}'`);
+      else if (c.set(String(v)) === false) problems.push(`${k}: '${String(v).slice(0, 40)}' is not one of its options`);
     }
+    for (const c of controls.values()) if (c.apply) c.apply();
+    if (now) run();
+    return problems;
   }
 
-  function recompute() {
+  /** Shows a request (a scenario) in the inputs and updates. */
+  function load(request) {
+    const next = form.fromRequest(request, getState());
+    for (const [k, v] of Object.entries(next)) controls.get(k).set(v);
+    run();
+  }
+
+  function currentRequest(values) {
+    form.sync(values);
+    const r = form.read(values);
+    if (r.errors) return r;
+    return { request: { kind: spec.kind, ...(spec.constants || {}), ...r.fields } };
+  }
+
+  // ---- one update ----
+  function context(request, values) {
+    const angleUnit = values.angles;
+    const ctx = {
+      request, values, angleUnit, kit, result: null, flags: {},
+      A: (rad) => angle(rad, angleUnit),
+      au: angleUnit ? angleLabel(angleUnit) : '',
+      src: (...keys) => sourceOf(ctx.result, ...keys),
+    };
+    return ctx;
+  }
+
+  function markStale() {
+    if (!last) return;
+    staleNote.textContent = 'Showing the last valid result; fix the marked input.';
+    for (const n of [headline, body, plots]) n.classList.add('stale');
+    for (const c of cards) if (c.made.stale) c.made.root.classList.add('stale');
+    stopWork();
+  }
+
+  function run() {
     const t0 = performance.now();
-    const r = currentRequest();
+    const values = getState();
+    const r = currentRequest(values);
     if (r.errors) { form.showErrors(r.errors); markStale(); return; }
-    let result;
+    const ctx = context(r.request, values);
+    const figs = figures.map((f) => ({ ...f, shown: f.spec.when ? !!f.spec.when(ctx) : true }));
+    const drawn = figs.filter((f) => f.shown && !f.spec.work);
+    let ev;
     try {
-      result = api.evaluate(r.request);
+      ev = evaluateView({
+        request: r.request,
+        resultRequest: spec.resultRequest ? spec.resultRequest(r.request) : r.request,
+        figures: drawn.map((f) => ({ name: resolve(f.spec.name, ctx), options: spec.angles ? { angle_unit: ctx.angleUnit } : {} })),
+      });
     } catch (e) {
-      const field = e && e.field ? e.field : 'request';
-      form.showErrors({ [field]: e && e.message ? e.message : String(e) });
+      form.showErrors({ [e && e.field ? e.field : 'request']: message(e) });
       markStale();
       return;
     }
     form.showErrors({});
     staleNote.textContent = '';
-    table.classList.remove('stale'); status.classList.remove('stale');
-    const ctx = { angleUnit, request: r.request };
-    lastGood = { request: r.request, result, rows: spec.rows(result, ctx) };
-    renderTable(lastGood.rows);
-    renderFlags(result.flags || []);
-    status.replaceChildren(...[spec.status ? spec.status(result, ctx) : null].filter(Boolean));
-    for (const p of plots) {
-      p.card.root.classList.remove('stale');
-      try {
-        const rendered = api.figure(r.request, p.name, { angle_unit: angleUnit });
-        p.card.show(rendered);
-        p.card.fresh();
-      } catch (e) {
-        p.card.fail(e && e.message ? e.message : String(e));
-      }
+    for (const n of [headline, body, plots]) n.classList.remove('stale');
+    for (const c of cards) c.made.root.classList.remove('stale');
+    ctx.result = ev.result;
+    ctx.flags = Object.fromEntries((ev.result.flags || []).map((f) => [f.key, f]));
+
+    // headline, cautions, tables, regime checks
+    headline.replaceChildren(...[spec.headline(ctx)].flat().filter(Boolean));
+    cautions.replaceChildren(...(spec.cautions ? spec.cautions(ctx) : []), ...cautionItems(ev.result.flags));
+    const tables = [];
+    const blocks = [...spec.body(ctx), { title: 'Validity', ...flagsTable(ev.result.flags) }];
+    body.replaceChildren(...blocks.map((b) => block(b, tables)));
+    root.dataset.level = levelOf(ev.result.flags);
+    last = { request: r.request, result: ev.result, tables };
+
+    // figures
+    const note = spec.figureNote ? spec.figureNote(ctx) : '';
+    plotNote.textContent = note || '';
+    plotNote.hidden = !note;
+    for (const f of figs) {
+      f.card.root.hidden = !f.shown;
+      if (f.shown && f.spec.titleFor) f.card.setTitle(f.spec.titleFor(ctx));
     }
+    plots.hidden = !figs.some((f) => f.shown);
+    drawn.forEach((f, i) => f.card.draw(ev.figures[i]));
+
+    for (const c of cards) c.made.render(ctx);
+    runWork(ctx);
     root.dataset.lastMs = (performance.now() - t0).toFixed(2);
   }
 
-  function renderTable(rows) {
-    const trs = [];
-    for (const row of rows) {
-      if (row.section) { trs.push(el('tr', { class: 'section' }, el('td', { colspan: '5', text: row.section }))); continue; }
-      const src = row.source || null;
-      trs.push(el('tr', { 'data-key': row.key || '' },
-        el('td', { text: row.label }),
-        el('td', { class: 'num', tabindex: src ? '0' : null, 'data-source': src, 'data-value': exact(row.value), 'data-key': row.key || null },
-          typeof row.value === 'number' || row.value === null ? fmt(row.value, row.digits || 9) : String(row.value)),
-        el('td', { text: row.unit || '' }),
-        el('td', { class: 'num rel', 'data-value': exact(row.rel) }, row.rel === undefined || row.rel === null ? '' : fmt(row.rel, 3)),
-        el('td', { class: 'src src-col', text: src || '—' })));
-    }
-    tbody.replaceChildren(...trs);
+  function block(b, tables) {
+    const frag = document.createDocumentFragment();
+    if (b.title) frag.append(el('h3', { text: b.title }));
+    if (b.note !== undefined) { frag.append(el('p', { class: 'muted', text: b.note })); return frag; }
+    if (b.grid) return el('div', { class: 'enc-grid' }, b.grid.map((column) => el('div', {}, column.map((x) => block(x, tables)))));
+    tables.push(b);
+    const t = renderTable(b, { digits });
+    if (b.role) parts.set(b.role, t);
+    frag.append(t);
+    return frag;
   }
 
-  function renderFlags(flags) {
-    const items = [];
-    const trs = [];
-    for (const f of flags) {
-      trs.push(el('tr', { 'data-flag': f.key, 'data-level': f.level },
-        el('td', { text: f.key.replace(/_/g, ' ') }),
-        el('td', {}, el('span', { class: `badge ${f.level}`, text: f.level })),
-        el('td', { class: 'num', text: f.value === null || f.value === undefined ? '' : fmt(f.value, 4) }),
-        el('td', { class: 'msg', text: f.message })));
-      if (f.level !== 'ok') items.push(el('li', { class: f.level, role: f.level === 'invalid' ? 'alert' : null }, el('strong', { text: f.level === 'invalid' ? 'Outside validity: ' : 'Caution: ' }), f.message));
-    }
-    flagBody.replaceChildren(...trs);
-    cautions.replaceChildren(...items);
-    root.dataset.level = levelOf(flags);
+  // ---- progressive work ----
+  function stopWork() {
+    workGen += 1;
+    if (work) { work.handle.stop(); work = null; }
   }
 
+  function runWork(ctx) {
+    if (!spec.work) return;
+    const key = spec.work.key(ctx);
+    if (work && key === work.key) { if (work.handle.refresh) work.handle.refresh(ctx); return; }
+    stopWork();
+    if (key === null || key === undefined) return;
+    const handle = spec.work.start(ctx, kit);
+    if (!handle) return;
+    const gen = workGen;
+    work = { key, handle };
+    root.dataset.workDone = 'false';
+    const tick = () => {
+      if (gen !== workGen) return;
+      let done;
+      try {
+        done = handle.step(WORK_BUDGET_MS);
+      } catch (e) {
+        if (handle.fail) handle.fail(message(e));
+        return;
+      }
+      if (done) { root.dataset.workDone = 'true'; return; }
+      requestAnimationFrame(tick);
+    };
+    requestAnimationFrame(tick);
+  }
+
+  // ---- exports ----
   csvBtn.addEventListener('click', () => {
-    if (!lastGood) return;
-    const rows = [['quantity', 'value', 'unit', 'relative_error', 'source']];
-    for (const r of lastGood.rows) if (!r.section) rows.push([r.label, exact(r.value), r.unit || '', exact(r.rel), r.source || '']);
-    for (const f of lastGood.result.flags || []) rows.push([`flag ${f.key}`, f.level, f.value ?? '', '', f.message]);
-    download(`chiwave-${spec.id}.csv`, csv(rows), 'text/csv');
+    if (!last) return;
+    const rows = spec.csv ? spec.csv(last) : [['quantity', 'value', 'unit', 'relative_error', 'source'],
+      ...last.tables.flatMap(tableCsvRows), ...flagsCsvRows(last.result.flags)];
+    download(`chiwave-${id}.csv`, csv(rows), 'text/csv');
   });
   jsonBtn.addEventListener('click', () => {
-    if (!lastGood) return;
-    download(`chiwave-${spec.id}.json`, JSON.stringify({ request: lastGood.request, result: lastGood.result }, null, 2), 'application/json');
+    if (!last) return;
+    const extra = spec.json ? spec.json(last, kit) : {};
+    download(`chiwave-${id}.json`, JSON.stringify({ request: last.request, result: last.result, ...extra }, null, 2), 'application/json');
   });
 
-  form.load(spec.defaults);
   return {
-    id: spec.id, title: spec.title, kind: spec.kind, root,
-    load(request) { form.load(request); recompute(); },
-    recompute,
-    request() { const r = currentRequest(); return r.request || null; },
-    get last() { return lastGood; },
+    id, title: spec.title, kind: spec.kind, aliases: spec.aliases || [], root,
+    /** Recomputes now (a tab shown, the page started). */
+    update: run,
+    load,
+    getState,
+    setState,
+    /** The request of the current inputs, or null while an input is refused. */
+    request() { const r = currentRequest(getState()); return r.request || null; },
+    /** The names of the parts a page can show alone, and one part's element. */
+    parts: () => [...parts.keys()],
+    part: (name) => parts.get(name) || null,
+    get last() { return last; },
   };
 }
+
+function resolve(x, ctx) {
+  return typeof x === 'function' ? x(ctx) : x;
+}
+
+function setCheck(box, v) {
+  if (v !== 'true' && v !== 'false') return false;
+  box.checked = v === 'true';
+  return true;
+}
+
+/** A state control for a select the machinery (or a card) builds itself. */
+export function selectControl(key, sel, initial) {
+  return {
+    key, node: sel, get: () => sel.value,
+    set(v) { if (![...sel.options].some((o) => o.value === v)) return false; sel.value = v; return true; },
+    reset() { sel.value = initial; },
+  };
+}
+

@@ -1,7 +1,7 @@
-// The list of views, in tab order. Adding a view = one module here.
+// The list of views, in tab order. Adding a view = one module here (a spec for viewkit.makeView).
 import { lightView } from './light.js';
 import { lensView } from './lens.js';
 import { encounterView } from './encounter.js';
-import { radiationView } from './radiation.js';
+import { waveformView } from './waveform.js';
 
-export const VIEWS = [lightView, lensView, encounterView, radiationView];
+export const VIEWS = [lightView, lensView, encounterView, waveformView];

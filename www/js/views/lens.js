@@ -1,50 +1,52 @@
 // Point-lens view: Einstein radius, images, magnifications, time delay; wave-optics
 // amplification F(w, y) when a frequency is given. Keys are the core's LensResult contract.
 import { el, fmt } from '../util.js';
-import { angle, angleLabel, sourceOf } from '../viewkit.js';
+import { quantity, number, group } from '../inputs.js';
+import { QUANTITY_COLUMNS, qrow } from '../table.js';
+import { headNumber } from '../viewkit.js';
 
 const MASS_UNITS = [['Msun', 'M☉ (Msun)'], ['kg', 'kg'], ['Mearth', 'M⊕ (Mearth)'], ['Mjup', 'M♃ (Mjup)']];
 const DIST_UNITS = [['kpc', 'kpc'], ['pc', 'pc'], ['Mpc', 'Mpc'], ['au', 'au'], ['m', 'm']];
 const FREQ_UNITS = [['Hz', 'Hz'], ['mHz', 'mHz'], ['uHz', 'µHz'], ['kHz', 'kHz'], ['MHz', 'MHz'], ['GHz', 'GHz']];
 
-function rows(r, { angleUnit }) {
-  const s = (k) => sourceOf(r, k);
-  const out = [{ section: 'Einstein ring' }];
-  out.push({ key: 'einstein_radius_rad', label: 'Einstein angle θ_E', value: angle(r.einstein_radius_rad, angleUnit), unit: angleLabel(angleUnit), source: s('einstein_radius_rad') });
-  out.push({ key: 'einstein_radius_au', label: 'Einstein radius R_E = θ_E D_L', value: r.einstein_radius_au, unit: 'au', source: s('einstein_radius_au') });
-  out.push({ key: 'einstein_radius_m', label: 'Einstein radius R_E', value: r.einstein_radius_m, unit: 'm', source: s('einstein_radius_m') });
-  out.push({ section: 'Images (ray optics)' });
+function body({ result: r, A, au, src }) {
+  const rows = [{ section: 'Einstein ring' }];
+  const row = (...a) => rows.push(qrow(...a));
+  row('einstein_radius_rad', 'Einstein angle θ_E', A(r.einstein_radius_rad), au, src('einstein_radius_rad'));
+  row('einstein_radius_au', 'Einstein radius R_E = θ_E D_L', r.einstein_radius_au, 'au', src('einstein_radius_au'));
+  row('einstein_radius_m', 'Einstein radius R_E', r.einstein_radius_m, 'm', src('einstein_radius_m'));
+  rows.push({ section: 'Images (ray optics)' });
   const names = ['minimum image', 'saddle image'];
   (r.images || []).forEach((im, i) => {
-    out.push({ key: `image_${i}_position`, label: `${names[i] || `image ${i + 1}`}: position`, value: im.position, unit: 'θ_E', source: s('images') });
-    out.push({ key: `image_${i}_magnification`, label: `${names[i] || `image ${i + 1}`}: magnification μ`, value: im.magnification, unit: '', source: s('images') });
+    row(`image_${i}_position`, `${names[i] || `image ${i + 1}`}: position`, im.position, 'θ_E', src('images'));
+    row(`image_${i}_magnification`, `${names[i] || `image ${i + 1}`}: magnification μ`, im.magnification, '', src('images'));
   });
-  out.push({ key: 'total_magnification', label: 'total magnification |μ₊| + |μ₋|', value: r.total_magnification, unit: '', source: s('total_magnification') });
-  out.push({ key: 'time_delay_s', label: 'time delay (saddle − minimum)', value: r.time_delay_s, unit: 's', source: s('time_delay_s') });
-  out.push({ key: 'time_delay_dimensionless', label: 'time delay / (4GM(1+z)/c³)', value: r.time_delay_dimensionless, unit: '', source: s('time_delay_dimensionless') });
-  out.push({ key: 'mass_msun', label: 'lens mass', value: r.mass_msun, unit: 'M☉', source: s('mass_msun') });
-  out.push({ key: 'redshifted_mass_msun', label: 'redshifted mass (1 + z_L) M', value: r.redshifted_mass_msun, unit: 'M☉', source: s('redshifted_mass_msun') || s('mass_msun') });
+  row('total_magnification', 'total magnification |μ₊| + |μ₋|', r.total_magnification, '', src('total_magnification'));
+  row('time_delay_s', 'time delay (saddle − minimum)', r.time_delay_s, 's', src('time_delay_s'));
+  row('time_delay_dimensionless', 'time delay / (4GM(1+z)/c³)', r.time_delay_dimensionless, '', src('time_delay_dimensionless'));
+  row('mass_msun', 'lens mass', r.mass_msun, 'M☉', src('mass_msun'));
+  row('redshifted_mass_msun', 'redshifted mass (1 + z_L) M', r.redshifted_mass_msun, 'M☉', src('redshifted_mass_msun', 'mass_msun'));
   if (r.w !== undefined) {
-    out.push({ section: 'Wave optics' });
-    out.push({ key: 'frequency_hz', label: 'frequency f', value: r.frequency_hz, unit: 'Hz', source: 'your input' });
-    out.push({ key: 'w', label: 'dimensionless frequency w', value: r.w, unit: '', source: s('w') });
-    out.push({ key: 'amplification_abs', label: 'amplification |F|', value: r.amplification_abs, unit: '', source: s('amplification_abs') });
-    out.push({ key: 'amplification_phase_rad', label: 'phase arg F', value: r.amplification_phase_rad, unit: 'rad', source: s('amplification_phase_rad') });
+    rows.push({ section: 'Wave optics' });
+    row('frequency_hz', 'frequency f', r.frequency_hz, 'Hz', 'your input');
+    row('w', 'dimensionless frequency w', r.w, '', src('w'));
+    row('amplification_abs', 'amplification |F|', r.amplification_abs, '', src('amplification_abs'));
+    row('amplification_phase_rad', 'phase arg F', r.amplification_phase_rad, 'rad', src('amplification_phase_rad'));
     if (r.amplification) {
-      out.push({ key: 'amplification_re', label: 'Re F', value: r.amplification.re, unit: '', source: s('amplification') });
-      out.push({ key: 'amplification_im', label: 'Im F', value: r.amplification.im, unit: '', source: s('amplification') });
+      row('amplification_re', 'Re F', r.amplification.re, '', src('amplification'));
+      row('amplification_im', 'Im F', r.amplification.im, '', src('amplification'));
     }
     if (r.amplification_geometric) {
-      out.push({ key: 'amplification_geometric_re', label: 'Re F (geometric optics)', value: r.amplification_geometric.re, unit: '', source: s('amplification_geometric') });
-      out.push({ key: 'amplification_geometric_im', label: 'Im F (geometric optics)', value: r.amplification_geometric.im, unit: '', source: s('amplification_geometric') });
+      row('amplification_geometric_re', 'Re F (geometric optics)', r.amplification_geometric.re, '', src('amplification_geometric'));
+      row('amplification_geometric_im', 'Im F (geometric optics)', r.amplification_geometric.im, '', src('amplification_geometric'));
     }
-    out.push({ key: 'amplification_method', label: 'method for F', value: r.amplification_method || '—', unit: '', source: s('amplification') });
+    row('amplification_method', 'method for F', r.amplification_method || '—', '', src('amplification'));
   }
-  return out;
+  return [{ role: 'results', columns: QUANTITY_COLUMNS, rows }];
 }
 
-function status(r, { angleUnit }) {
-  const parts = ['θ_E = ', el('span', { class: 'big', 'data-role': 'einstein', 'data-value': String(r.einstein_radius_rad) }, fmt(angle(r.einstein_radius_rad, angleUnit), 6)), ` ${angleLabel(angleUnit)}, μ = `,
+function headline({ result: r, A, au }) {
+  const parts = ['θ_E = ', headNumber('einstein', r.einstein_radius_rad, fmt(A(r.einstein_radius_rad), 6)), ` ${au}, μ = `,
     el('span', { class: 'big' }, fmt(r.total_magnification, 6))];
   if (r.amplification_abs !== undefined) parts.push(', |F| = ', el('span', { class: 'big' }, fmt(r.amplification_abs, 6)));
   return el('span', {}, ...parts);
@@ -54,22 +56,23 @@ export const lensView = {
   id: 'lens',
   title: 'Lensing',
   kind: 'lens',
-  angleOutput: true,
-  angleDefault: 'mas',
-  inputsNote: '(point mass, thin lens)',
-  fields: [
-    { key: 'mass', label: 'Lens mass', type: 'quantity', units: MASS_UNITS, value: '0.3', unit: 'Msun' },
-    { key: 'lens_distance', label: 'Lens distance D_L', type: 'quantity', units: DIST_UNITS, value: '4', unit: 'kpc' },
-    { key: 'source_distance', label: 'Source distance D_S', type: 'quantity', units: DIST_UNITS, value: '8', unit: 'kpc' },
-    { key: 'offset', label: 'Source offset β', hint: '(Einstein radii)', type: 'number', value: '0.5' },
-    { key: 'frequency', label: 'Wave frequency f', hint: '(optional)', type: 'quantity', units: FREQ_UNITS, value: '', unit: 'Hz', optional: true, group: 'Wave optics' },
-    { key: 'lens_redshift', label: 'Lens redshift z_L', type: 'number', value: '0', optional: true },
+  angles: 'mas',
+  digits: 9,
+  intro: '(point mass, thin lens)',
+  inputs: [
+    quantity('mass', 'Lens mass', MASS_UNITS, { value: '0.3', unit: 'Msun' }),
+    quantity('lens_distance', 'Lens distance D_L', DIST_UNITS, { value: '4', unit: 'kpc' }),
+    quantity('source_distance', 'Source distance D_S', DIST_UNITS, { value: '8', unit: 'kpc' }),
+    number('offset', 'Source offset β', { hint: '(Einstein radii)', value: '0.5' }),
+    group('Wave optics', [
+      quantity('frequency', 'Wave frequency f', FREQ_UNITS, { hint: '(optional)', value: '100', unit: 'Hz', optional: true }),
+      number('lens_redshift', 'Lens redshift z_L', { value: '0', optional: true }),
+    ]),
   ],
-  rows,
-  status,
+  headline,
+  body,
   figures: [
-    { name: 'magnification', title: 'Magnification against offset', stem: 'magnification' },
-    { name: 'amplification', title: 'Wave-optics amplification |F|(w)', stem: 'amplification' },
+    { stem: 'magnification', name: 'magnification', title: 'Magnification against offset' },
+    { stem: 'amplification', name: 'amplification', title: 'Wave-optics amplification |F|(w)' },
   ],
-  defaults: { mass: '0.3Msun', lens_distance: '4kpc', source_distance: '8kpc', offset: 0.5, frequency: '100Hz' },
 };

@@ -1,10 +1,13 @@
-// Shared launcher for the end-to-end test and the timing page: Debian's Chromium through
-// playwright-core (which downloads no browser), a fresh empty profile, no network.
+// Shared support of the end-to-end tests and the timing page: Debian's Chromium through
+// playwright-core (which downloads no browser), a fresh empty profile, no network; the single-file
+// page opened from file:// with guards that record every request and console error; input helpers
+// that wait for the page's recompute; the CLI for reference values.
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { execFileSync } from 'node:child_process';
+import assert from 'node:assert/strict';
 import { chromium } from 'playwright-core';
 
 export const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -62,3 +65,42 @@ export function cli(args) {
   }
 }
 
+
+/** Waits for the page's next animation frame (inputs recompute there) and the task after it. */
+export function settle(page) {
+  return page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
+}
+
+/**
+ * Opens dist/chiwave.html from file:// in a fresh browser, with the request and console guards,
+ * waits until the page is ready and (with `view`) shows that view's tab. Returns
+ * {page, seen, fill(selector, text), pick(selector, value), assertClean(), close()}.
+ */
+export async function openPage({ view, timeout = 8000, width, height } = {}) {
+  assert.ok(fs.existsSync(path.join(repo, 'dist', 'chiwave.html')), 'dist/chiwave.html is missing: run scripts/build-web.sh');
+  fs.mkdirSync(artifacts, { recursive: true });
+  const browser = await launch({ width, height });
+  const page = await browser.context.newPage();
+  page.setDefaultTimeout(timeout);
+  const seen = watch(page);
+  await page.goto(pageUrl());
+  await page.waitForSelector('body[data-ready="true"]', { timeout: 20000 });
+  if (view) {
+    await page.click(`#tab-${view}`);
+    await page.waitForSelector(`#view-${view}:not([hidden])`);
+  }
+  return {
+    page,
+    seen,
+    /** Sets a text input and fires the input event, as typing does; waits for the recompute. */
+    async fill(selector, text) { await page.fill(selector, text); await settle(page); },
+    async pick(selector, value) { await page.selectOption(selector, value); await settle(page); },
+    /** No request left the page (only file:, data: and blob: URLs) and nothing was logged as an error. */
+    assertClean() {
+      const bad = seen.requests.filter((u) => !/^(file|data|blob):/.test(u));
+      assert.deepEqual(bad, [], 'only file:, data: and blob: URLs');
+      assert.deepEqual(seen.errors, []);
+    },
+    close: () => browser.close(),
+  };
+}
