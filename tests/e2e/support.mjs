@@ -72,18 +72,18 @@ export function settle(page) {
 }
 
 /**
- * Opens dist/chiwave.html from file:// in a fresh browser, with the request and console guards,
- * waits until the page is ready and (with `view`) shows that view's tab. Returns
+ * Opens dist/chiwave.html (+ `hash`) from file:// in a fresh browser, with the request and
+ * console guards, waits until the page is ready and (with `view`) shows that view's tab. Returns
  * {page, seen, fill(selector, text), pick(selector, value), assertClean(), close()}.
  */
-export async function openPage({ view, timeout = 8000, width, height } = {}) {
+export async function openPage({ view, hash = '', timeout = 8000, width, height } = {}) {
   assert.ok(fs.existsSync(path.join(repo, 'dist', 'chiwave.html')), 'dist/chiwave.html is missing: run scripts/build-web.sh');
   fs.mkdirSync(artifacts, { recursive: true });
   const browser = await launch({ width, height });
   const page = await browser.context.newPage();
   page.setDefaultTimeout(timeout);
   const seen = watch(page);
-  await page.goto(pageUrl());
+  await page.goto(pageUrl() + hash);
   await page.waitForSelector('body[data-ready="true"]', { timeout: 20000 });
   if (view) {
     await page.click(`#tab-${view}`);
