@@ -1,22 +1,15 @@
 // End-to-end test of the encounter view of the single-file page (dist/chiwave.html) from
 // file:// in Debian's headless Chromium with the network off. The CSV used below is
 // synthetic, invented for this test: it is NOT numerical-relativity data.
-import { test, before, after } from 'node:test';
+import { test, before } from 'node:test';
 import assert from 'node:assert/strict';
 import path from 'node:path';
-import { openPage, settle, artifacts, cli } from './support.mjs';
+import { sharedPage, settle, artifacts, cli } from './support.mjs';
 
-let ui, page;
 const V = '#view-encounter';
-
-before(async () => {
-  ui = await openPage({ view: 'encounter' });
-  page = ui.page;
-});
-
-after(async () => {
-  if (ui) await ui.close();
-});
+const ui = sharedPage({ view: 'encounter' });
+let page;
+before(async () => { ({ page } = await ui.ready); });
 
 const type = (selector, text) => ui.fill(selector, text);
 const pick = (selector, value) => ui.pick(selector, value);

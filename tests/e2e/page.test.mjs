@@ -1,21 +1,14 @@
 // End-to-end test of the single-file page (dist/chiwave.html, built by scripts/build-web.sh),
 // opened from file:// in Debian's headless Chromium with the network off.
-import { test, before, after } from 'node:test';
+import { test, before } from 'node:test';
 import assert from 'node:assert/strict';
 import fs from 'node:fs';
 import path from 'node:path';
-import { openPage, settle, artifacts, cli } from './support.mjs';
+import { sharedPage, settle, artifacts, cli } from './support.mjs';
 
-let ui, page;
-
-before(async () => {
-  ui = await openPage();
-  page = ui.page;
-});
-
-after(async () => {
-  if (ui) await ui.close();
-});
+const ui = sharedPage();
+let page;
+before(async () => { ({ page } = await ui.ready); });
 
 const type = (selector, text) => ui.fill(selector, text);
 

@@ -2,20 +2,13 @@
 // network off): the flat input state (getState → setState on a fresh page shows the same numbers),
 // the one number parser (nan, inf and overflowing text refused with the field named, the last
 // result kept), and the former view id #view=radiation opening the waveform view.
-import { test, before, after } from 'node:test';
+import { test, before } from 'node:test';
 import assert from 'node:assert/strict';
-import { openPage, settle } from './support.mjs';
+import { sharedPage, openPage, settle } from './support.mjs';
 
-let ui, page;
-
-before(async () => {
-  ui = await openPage();
-  page = ui.page;
-});
-
-after(async () => {
-  if (ui) await ui.close();
-});
+const ui = sharedPage();
+let page;
+before(async () => { ({ page } = await ui.ready); });
 
 // Synthetic rows invented for this test: NOT numerical-relativity data.
 const NR_ROWS = 'E/M, J/M2, nu, chi, sigma_chi\n1.0225, 1.50, 0.25, 1.60, 0.05\n1.0225, 2.00, 0.25, 0.72, 0.03';

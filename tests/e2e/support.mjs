@@ -8,6 +8,7 @@ import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { execFileSync } from 'node:child_process';
 import assert from 'node:assert/strict';
+import { before, after } from 'node:test';
 import { chromium } from 'playwright-core';
 
 export const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -103,4 +104,19 @@ export async function openPage({ view, hash = '', timeout = 8000, width, height 
     },
     close: () => browser.close(),
   };
+}
+
+/** For a test file: opens the page once before its tests (openPage options) and closes it after.
+ *  Returns the handle of openPage, filled in when the tests start; `ui.ready` resolves to it (the
+ *  root hooks of a file do not wait for each other). */
+export function sharedPage(options) {
+  const ui = {};
+  ui.ready = new Promise((resolve, reject) => {
+    before(async () => {
+      try { resolve(Object.assign(ui, await openPage(options))); } catch (e) { reject(e); throw e; }
+    });
+  });
+  ui.ready.catch(() => {}); // reported by the hook itself
+  after(async () => { if (ui.close) await ui.close(); });
+  return ui;
 }

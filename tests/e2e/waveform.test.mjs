@@ -2,22 +2,15 @@
 // file:// in Debian's headless Chromium with the network off. Reference values come from the
 // native CLI (same core) and from the closed form of Herrmann et al. 2021 (arXiv:2101.07255,
 // via the core's e_rad_closed), which the flux integral must reproduce.
-import { test, before, after } from 'node:test';
+import { test, before } from 'node:test';
 import assert from 'node:assert/strict';
 import path from 'node:path';
-import { openPage, artifacts, cli } from './support.mjs';
+import { sharedPage, artifacts, cli } from './support.mjs';
 
-let ui, page;
 const V = '#view-waveform';
-
-before(async () => {
-  ui = await openPage({ view: 'waveform', timeout: 20000 });
-  page = ui.page;
-});
-
-after(async () => {
-  if (ui) await ui.close();
-});
+const ui = sharedPage({ view: 'waveform', timeout: 20000 });
+let page;
+before(async () => { ({ page } = await ui.ready); });
 
 const fill = (selector, text) => ui.fill(selector, text);
 const pick = (selector, value) => ui.pick(selector, value);
@@ -52,7 +45,10 @@ const CLI_CASE = ['waveform', '--m1', '1', '--m2', '2', '--gamma', '1.5', '--b',
 test('waveform: the live energy balance equals the CLI and the closed form (both frames)', async () => {
   for (const fr of ['rest2', 'cm']) {
     await geometricCase(fr);
-    // While the sky integrals run, the progress bar moves through intermediate values.
+    // Start the sky work afresh (an input left unchanged keeps it running) and follow it: while
+    // the sky integrals run, the progress bar moves through intermediate values.
+    await fill('#f-waveform-b', '41');
+    await fill('#f-waveform-b', '40');
     const fractions = await page.evaluate(() => new Promise((resolve) => {
       const seen = [];
       const bar = document.querySelector('#view-waveform [data-role="sky-progress"]');
@@ -97,6 +93,8 @@ test('waveform: figures — strain with memory, sky map in both projections, spe
   await page.locator(`${V} [data-plot="waveform-sky"] .plot-box`).hover();
   assert.match(await page.textContent(`${V} [data-plot="waveform-sky"] [data-role="heat-readout"]`), /^dE\/dΩ = \S+ \[M\]$/);
   await pick('#f-waveform-projection', 'equal_area');
+  assert.equal(await page.getAttribute(V, 'data-work-done'), 'true', 'a new projection redraws the map; the sums are not restarted');
+  assert.match(await svg('sky'), /cos θ/);
   await pick('#f-waveform-sky', 'memory');
   await skyDone();
   const sky = await svg('sky');

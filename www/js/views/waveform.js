@@ -197,6 +197,7 @@ const work = {
     let lastFraction = -1;
     let drawnAt = 0;
     const drawSky = () => sky.draw(() => job.sky_figure(projection));
+    balance.show(job.snapshot()); // the new job's progress at once, not the last job's
     spectrum.draw(() => job.spectrum_figure());
     drawSky();
     return {
