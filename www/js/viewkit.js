@@ -28,7 +28,7 @@
 // choices, card inputs); setState(map) sets them (unknown keys and values that are not options
 // are returned as problems) and updates.
 import { el, exact, download, csv } from './util.js';
-import { buildForm } from './inputs.js';
+import { buildForm, clip } from './inputs.js';
 import { plotCard } from './plot.js';
 import { renderTable, tableCsvRows, flagsTable, flagsCsvRows, cautionItems, levelOf } from './table.js';
 import { evaluateView, message, angle, angleLabel, angleUnits, sourceOf } from './core.js';
@@ -66,8 +66,9 @@ export function makeView(spec) {
   const controls = new Map(); // state key → {key, get, set, reset, node?, apply?}
   const parts = new Map(); // part name → element (figures, tables, cards), for showing one alone
   let last = null; // {request, result, tables}
-  let work = null; // {key, handle, gen}
+  let work = null; // {key, handle}
   let workGen = 0;
+  const listeners = []; // called with the state after every update
 
   const update = () => run();
   const form = buildForm(id, spec.inputs, () => schedule(update));
@@ -146,16 +147,16 @@ export function makeView(spec) {
 
   /** Sets the state (missing keys take their defaults); returns the keys and values it could
    *  not use, each as a short message; updates the view. */
-  function setState(map, { update: now = true } = {}) {
+  function setState(map) {
     const problems = [];
     for (const c of controls.values()) c.reset();
     for (const [k, v] of Object.entries(map || {})) {
       const c = controls.get(k);
-      if (!c) problems.push(`unknown key '${String(k).slice(0, 40)}'`);
-      else if (c.set(String(v)) === false) problems.push(`${k}: '${String(v).slice(0, 40)}' is not one of its options`);
+      if (!c) problems.push(`unknown key '${clip(k)}'`);
+      else if (c.set(String(v)) === false) problems.push(`${k}: '${clip(v)}' is not one of its options`);
     }
     for (const c of controls.values()) if (c.apply) c.apply();
-    if (now) run();
+    run();
     return problems;
   }
 
@@ -243,6 +244,7 @@ export function makeView(spec) {
     for (const c of cards) c.made.render(ctx);
     runWork(ctx);
     root.dataset.lastMs = (performance.now() - t0).toFixed(2);
+    for (const fn of listeners) fn(values);
   }
 
   function block(b, tables) {
@@ -311,6 +313,8 @@ export function makeView(spec) {
     setState,
     /** The request of the current inputs, or null while an input is refused. */
     request() { const r = currentRequest(getState()); return r.request || null; },
+    /** Calls fn(state) after every update that shows a result (e.g. to keep a link current). */
+    onUpdate(fn) { listeners.push(fn); },
     /** The names of the parts a page can show alone, and one part's element. */
     parts: () => [...parts.keys()],
     part: (name) => parts.get(name) || null,

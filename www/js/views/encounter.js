@@ -100,7 +100,7 @@ function body({ result: res, A, au, src, flags }) {
   }
   const orders = {
     role: 'orders', title: 'Scattering angle, order by order', cls: 'enc orders', rows,
-    columns: [col.label('Order'), col.value(`Term Δχ [${au}]`), col.value(`Cumulative χ [${au}]`), col.value('Share of total'), col.value('Rel. change'), col.text('Regime', { cls: 'regime' })],
+    columns: [col.label('Order'), col.value(`Term Δχ [${au}]`, { unit: au }), col.value(`Cumulative χ [${au}]`, { unit: au }), col.value('Share of total'), col.value('Rel. change'), col.text('Regime', { cls: 'regime' })],
   };
 
   // 2. kinematics
