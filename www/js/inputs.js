@@ -136,10 +136,10 @@ function sentKeys(c) {
 export function buildForm(viewId, items, onChange) {
   const controls = new Map();
   const fields = [];
-  const shown = []; // [node, show(state), field?]
+  const shown = []; // [node, show(state)] of every field and group
   const requestError = el('p', { class: 'request-error', role: 'alert' });
 
-  function makeControl(c, f, errId) {
+  function makeControl(c, errId) {
     const id = `f-${viewId}-${c.key}`;
     let node;
     if (c.type === 'select') {
@@ -157,7 +157,7 @@ export function buildForm(viewId, items, onChange) {
     }
     const units = c.type === 'select' ? [...c.options] : null; // per view: a loaded request may add a unit
     const ctl = {
-      key: c.key, spec: c, node, field: f, units,
+      key: c.key, spec: c, node, units,
       get: () => (c.type === 'check' ? String(node.checked) : node.value),
       /** Sets the value; false when it is not one of a select's options (add: make it one). */
       set(v, { add = false } = {}) {
@@ -195,12 +195,12 @@ export function buildForm(viewId, items, onChange) {
     const errFor = f.errorKeys[0] || item.key;
     const errId = `f-${viewId}-${item.key}-err`;
     f.err = el('p', { class: 'field-error', id: errId, role: 'alert', 'data-error-for': errFor });
-    const nodes = item.controls.map((c) => makeControl(c, f, errId));
+    const nodes = item.controls.map((c) => makeControl(c, errId));
     f.root = el('div', { class: 'field', 'data-field': item.key },
       el('label', { class: 'name', for: `f-${viewId}-${item.controls[0].key}` }, item.label, item.hint ? el('span', { class: 'hint' }, ` ${item.hint}`) : null),
       el('div', { class: 'row' }, nodes), f.err);
     fields.push(f);
-    shown.push([f.root, item.show, f]);
+    shown.push([f.root, item.show]);
     return f.root;
   }
 

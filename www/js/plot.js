@@ -82,13 +82,15 @@ function heatAt(heat, x, y) {
   return el('span', { class: 'item', 'data-role': 'heat-readout' }, text);
 }
 
-/** Parses the SVG text of a rendered figure into an element of this document (no innerHTML:
- *  the XML parser runs no script, and a malformed figure is an error, not markup). */
+/** Parses the SVG text of a rendered figure (from the core's own renderer) into an element of
+ *  this document. No innerHTML: DOMParser's document runs no script, and text that is not one
+ *  SVG element is an error, not markup. (The HTML parser is as fast as innerHTML here; the XML
+ *  parser with importNode took about twice as long on a 100 kB figure.) */
 function svgElement(text) {
-  const doc = new DOMParser().parseFromString(text, 'image/svg+xml');
-  const svg = doc.documentElement;
-  if (!svg || svg.localName !== 'svg' || doc.querySelector('parsererror')) throw new Error('the figure is not valid SVG');
-  return document.importNode(svg, true);
+  const doc = new DOMParser().parseFromString(text, 'text/html');
+  const svg = doc.body.firstElementChild;
+  if (!svg || svg.localName !== 'svg' || doc.body.childElementCount !== 1) throw new Error('the figure is not one SVG element');
+  return document.adoptNode(svg);
 }
 
 /** Creates a plot card; returns {root, show(rendered), fail(message), fresh(), draw(outcome),
