@@ -260,9 +260,11 @@ export function makeView(spec) {
   }
 
   // ---- progressive work ----
+  // root[data-work-done]: 'false' while work runs, 'true' when it is done, absent with no work.
   function stopWork() {
     workGen += 1;
     if (work) { work.handle.stop(); work = null; }
+    delete root.dataset.workDone;
   }
 
   function runWork(ctx) {
