@@ -12,22 +12,11 @@
 //! Stegun 1964, eq. 25.4.29).
 
 use crate::error::InputError;
-use crate::numeric::gauss_legendre;
+use crate::numeric::cached_rule;
 use std::f64::consts::FRAC_PI_2;
-use std::sync::OnceLock;
-
-fn rule(n: usize) -> &'static (Vec<f64>, Vec<f64>) {
-    static R24: OnceLock<(Vec<f64>, Vec<f64>)> = OnceLock::new();
-    static R32: OnceLock<(Vec<f64>, Vec<f64>)> = OnceLock::new();
-    if n == 24 {
-        R24.get_or_init(|| gauss_legendre(24))
-    } else {
-        R32.get_or_init(|| gauss_legendre(32))
-    }
-}
 
 fn panels(f: &impl Fn(f64) -> f64, rho: f64, n: usize) -> f64 {
-    let r = rule(n);
+    let r = cached_rule(n);
     let mut sum = 0.0;
     let mut lo = 0.0;
     let mut gap = FRAC_PI_2; // distance from lo to π/2

@@ -58,11 +58,12 @@
 //! O(1/j^(n+1)) (tested); near capture it differs from the PM series, which has no meaning there.
 
 use crate::error::InputError;
-use crate::numeric::gauss_legendre;
+use crate::numeric::poly;
+use crate::numeric::quadrature::{adaptive_gl, integrate_gl, integrate_panels, QuadratureFailure};
+use crate::numeric::{cached_rule, Rule};
 use crate::validity::{Flag, Level};
 use serde::Serialize;
 use std::f64::consts::{FRAC_PI_2, PI};
-use std::sync::OnceLock;
 
 /// Largest number of angle coefficients χ_1 … χ_n accepted.
 pub const MAX_COEFFICIENTS: usize = 8;
@@ -324,127 +325,6 @@ pub fn potential(gamma: f64, nu: f64, chi: &[f64]) -> Result<Potential, InputErr
 }
 
 // ------------------------------------------------------------------------------------------
-// Polynomials (coefficients in increasing powers)
-// ------------------------------------------------------------------------------------------
-
-fn peval(c: &[f64], x: f64) -> f64 {
-    c.iter().rev().fold(0.0, |acc, &a| acc * x + a)
-}
-
-fn pderiv(c: &[f64]) -> Vec<f64> {
-    c.iter().enumerate().skip(1).map(|(k, &a)| k as f64 * a).collect()
-}
-
-fn trim(c: &[f64]) -> &[f64] {
-    let mut n = c.len();
-    while n > 0 && c[n - 1] == 0.0 {
-        n -= 1;
-    }
-    &c[..n]
-}
-
-/// c(x) = (root − x) q(x) + remainder; returns q.
-fn deflate(c: &[f64], root: f64) -> Vec<f64> {
-    let n = c.len();
-    if n < 2 {
-        return vec![0.0];
-    }
-    // synthetic division by (x − root): s_{k−1} = c_k + root s_k
-    let mut s = vec![0.0; n - 1];
-    let mut acc = 0.0;
-    for k in (1..n).rev() {
-        acc = c[k] + root * acc;
-        s[k - 1] = acc;
-    }
-    s.iter().map(|v| -v).collect()
-}
-
-/// Root of a polynomial that changes sign on (a, b) and is monotone there: Newton's method,
-/// safeguarded by the bracket (a bisection step whenever Newton leaves the bracket or fails to
-/// halve |f|).
-fn solve_bracket(c: &[f64], dc: &[f64], mut a: f64, mut b: f64) -> f64 {
-    let sa = peval(c, a) > 0.0;
-    let mid = |a: f64, b: f64| if a > 0.0 && b > 16.0 * a { (a * b).sqrt() } else { 0.5 * (a + b) };
-    let mut x = mid(a, b);
-    let mut f_prev = f64::INFINITY;
-    for _ in 0..300 {
-        let fx = peval(c, x);
-        if fx == 0.0 || !fx.is_finite() {
-            return x;
-        }
-        if (fx > 0.0) == sa {
-            a = x;
-        } else {
-            b = x;
-        }
-        if b - a <= 4.0 * f64::EPSILON * a.abs().max(b.abs()) || b - a <= f64::MIN_POSITIVE {
-            return 0.5 * (a + b);
-        }
-        let d = peval(dc, x);
-        let xn = x - fx / d;
-        if d != 0.0 && xn > a && xn < b && fx.abs() <= 0.5 * f_prev {
-            if (xn - x).abs() <= 4.0 * f64::EPSILON * x.abs() {
-                return xn;
-            }
-            x = xn;
-        } else {
-            x = mid(a, b);
-        }
-        f_prev = fx.abs();
-    }
-    0.5 * (a + b)
-}
-
-/// All real roots of `c` in (lo, hi), sorted (double roots appear once).
-fn real_roots(c: &[f64], lo: f64, hi: f64) -> Vec<f64> {
-    roots_and_critical(c, lo, hi).0
-}
-
-/// The real roots of `c` in (lo, hi) and those of its derivative (both sorted): isolation by the
-/// critical points (the roots of c', found recursively), then a safeguarded Newton on each
-/// monotone piece.
-fn roots_and_critical(c: &[f64], lo: f64, hi: f64) -> (Vec<f64>, Vec<f64>) {
-    let c = trim(c);
-    let mut out = Vec::new();
-    if c.len() < 2 {
-        return (out, Vec::new());
-    }
-    if c.len() == 2 {
-        let x = -c[0] / c[1];
-        if x > lo && x < hi {
-            out.push(x);
-        }
-        return (out, Vec::new());
-    }
-    let dc = pderiv(c);
-    let crit = real_roots(&dc, lo, hi);
-    let mut prev = lo;
-    let mut f_prev = peval(c, lo);
-    for (k, &b) in crit.iter().chain(std::iter::once(&hi)).enumerate() {
-        let fb = peval(c, b);
-        if k > 0 && f_prev == 0.0 {
-            out.push(prev);
-        } else if f_prev * fb < 0.0 {
-            out.push(solve_bracket(c, &dc, prev, b));
-        }
-        prev = b;
-        f_prev = fb;
-    }
-    (out, crit)
-}
-
-/// Upper bound of the positive roots (Cauchy).
-fn cauchy_bound(c: &[f64]) -> f64 {
-    let c = trim(c);
-    match c.last() {
-        Some(&lead) if c.len() >= 2 => {
-            1.0 + c[..c.len() - 1].iter().map(|a| (a / lead).abs()).fold(0.0, f64::max)
-        }
-        _ => 1.0,
-    }
-}
-
-// ------------------------------------------------------------------------------------------
 // Shape of the radial problem
 // ------------------------------------------------------------------------------------------
 
@@ -474,12 +354,12 @@ fn u_w(pot: &Potential) -> f64 {
     }
     let mut c = vec![0.0];
     c.extend_from_slice(&pot.w);
-    let dw = pderiv(&c);
-    let d2 = pderiv(&dw);
-    let hi = cauchy_bound(&dw);
-    real_roots(&dw, 0.0, hi)
+    let dw = poly::derivative(&c);
+    let d2 = poly::derivative(&dw);
+    let hi = poly::cauchy_bound(&dw);
+    poly::real_roots(&dw, 0.0, hi)
         .into_iter()
-        .find(|&x| peval(&d2, x) < 0.0 || peval(&dw, x * (1.0 + 1e-9)) < 0.0)
+        .find(|&x| poly::eval(&d2, x) < 0.0 || poly::eval(&dw, x * (1.0 + 1e-9)) < 0.0)
         .unwrap_or(f64::INFINITY)
 }
 
@@ -491,22 +371,22 @@ fn shape(pot: &Potential, j: f64, uw: f64) -> Result<Shape, InputError> {
             reason: "j² overflows double precision; use j < 1e150".into(),
         });
     }
-    let hi = cauchy_bound(&r);
+    let hi = poly::cauchy_bound(&r);
     if !hi.is_finite() {
         return Err(InputError::Inconsistent {
             field: "j",
             reason: "the radial potential overflows double precision for these inputs".into(),
         });
     }
-    let (roots, crit) = roots_and_critical(&r, 0.0, hi);
-    let dr = pderiv(&r);
-    let d2r = pderiv(&dr);
-    let ub = crit.into_iter().find(|&x| peval(&d2r, x) > 0.0);
+    let (roots, crit) = poly::roots_and_critical(&r, 0.0, hi);
+    let dr = poly::derivative(&r);
+    let d2r = poly::derivative(&dr);
+    let ub = crit.into_iter().find(|&x| poly::eval(&d2r, x) > 0.0);
     let u0 = roots.first().copied();
     let u1 = roots.get(1).copied();
     let captured = match u0 {
         None => true,
-        Some(u0) => ub.is_some_and(|ub| ub < u0) || u0 >= uw || peval(&dr, u0) >= 0.0,
+        Some(u0) => ub.is_some_and(|ub| ub < u0) || u0 >= uw || poly::eval(&dr, u0) >= 0.0,
     };
     Ok(Shape { r, u0: if captured { None } else { u0 }, u1, ub, captured })
 }
@@ -517,20 +397,9 @@ fn shape(pot: &Potential, j: f64, uw: f64) -> Result<Shape, InputError> {
 
 const RULE_SIZES: [usize; 8] = [16, 24, 32, 48, 64, 96, 128, 192];
 
-fn rules() -> &'static Vec<(Vec<f64>, Vec<f64>)> {
-    static RULES: OnceLock<Vec<(Vec<f64>, Vec<f64>)>> = OnceLock::new();
-    RULES.get_or_init(|| RULE_SIZES.iter().map(|&n| gauss_legendre(n)).collect())
-}
-
-fn gl(f: &impl Fn(f64) -> f64, a: f64, b: f64, rule: &(Vec<f64>, Vec<f64>)) -> f64 {
-    let (c, h) = (0.5 * (a + b), 0.5 * (b - a));
-    rule.0.iter().zip(&rule.1).map(|(x, w)| w * f(c + h * x)).sum::<f64>() * h
-}
-
-/// Composite rule with `m` equal panels.
-fn gl_panels(f: &impl Fn(f64) -> f64, a: f64, b: f64, m: usize, rule: &(Vec<f64>, Vec<f64>)) -> f64 {
-    let h = (b - a) / m as f64;
-    (0..m).map(|k| gl(f, a + k as f64 * h, a + (k + 1) as f64 * h, rule)).sum()
+/// The k-th rule of [`RULE_SIZES`] (cached).
+fn rule(k: usize) -> &'static Rule {
+    cached_rule(RULE_SIZES[k])
 }
 
 /// Pieces of the far-from-capture integrand: with u = u0 sin θ,
@@ -560,7 +429,7 @@ impl FarForm {
     }
     fn d(&self, theta: f64) -> f64 {
         let u = self.u0 * theta.sin();
-        peval(&self.dw, u) / (self.j2 * (self.u0 + u))
+        poly::eval(&self.dw, u) / (self.j2 * (self.u0 + u))
     }
     /// Integrand of χ/2.
     fn chi_half(&self, theta: f64) -> f64 {
@@ -585,8 +454,8 @@ struct NearForm {
 
 impl NearForm {
     fn new(r: &[f64], u0: f64, u1: f64, j: f64) -> Self {
-        let q = deflate(r, u0);
-        let p = deflate(&q, u1);
+        let q = poly::deflate(r, u0);
+        let p = poly::deflate(&q, u1);
         NearForm { p, u0, eps: u1 - u0, j }
     }
     fn u(&self, t: f64) -> f64 {
@@ -598,7 +467,7 @@ impl NearForm {
         ((self.u0 - u).max(0.0) / self.eps).sqrt().asinh()
     }
     fn dphi(&self, t: f64) -> f64 {
-        2.0 * self.j / peval(&self.p, self.u(t)).sqrt()
+        2.0 * self.j / poly::eval(&self.p, self.u(t)).sqrt()
     }
 }
 
@@ -610,19 +479,18 @@ fn no_conv(what: &str) -> InputError {
 fn angle(pot: &Potential, sh: &Shape, j: f64) -> Result<f64, InputError> {
     let u0 = sh.u0.ok_or_else(|| no_conv("EOB angle: no turning point"))?;
     let near = sh.u1.filter(|&u1| u1 - u0 < NEAR_CAPTURE_GAP * u0);
-    let rl = rules();
     if let Some(u1) = near {
         // outer part u ∈ [0, u0/2]: R is bounded away from 0, plain rule in u;
         // inner part u ∈ [u0/2, u0]: u = u0 − ε sinh²t, composite rule in t.
         let nf = NearForm::new(&sh.r, u0, u1, j);
         let t_end = nf.t_of(0.5 * u0);
         let f = |t: f64| nf.dphi(t);
-        let fo = |u: f64| j / peval(&sh.r, u).sqrt();
+        let fo = |u: f64| j / poly::eval(&sh.r, u).sqrt();
         let mut m = (t_end / 1.5).ceil().max(1.0) as usize;
         for k in 0..5 {
-            let (ra, rb) = (&rl[k.min(rl.len() - 2)], &rl[(k + 1).min(rl.len() - 1)]);
-            let lo = gl_panels(&f, 0.0, t_end, m, &rl[0]) + gl(&fo, 0.0, 0.5 * u0, ra);
-            let hi = gl_panels(&f, 0.0, t_end, m, &rl[1]) + gl(&fo, 0.0, 0.5 * u0, rb);
+            let (ra, rb) = (rule(k.min(RULE_SIZES.len() - 2)), rule((k + 1).min(RULE_SIZES.len() - 1)));
+            let lo = integrate_panels(&f, 0.0, t_end, m, rule(0)) + integrate_gl(&fo, 0.0, 0.5 * u0, ra);
+            let hi = integrate_panels(&f, 0.0, t_end, m, rule(1)) + integrate_gl(&fo, 0.0, 0.5 * u0, rb);
             let chi_lo = 2.0 * lo - PI;
             let chi_hi = 2.0 * hi - PI;
             if chi_hi.is_finite() && (chi_hi - chi_lo).abs() <= REL_ANGLE * chi_hi.abs().max(1.0) {
@@ -634,9 +502,9 @@ fn angle(pot: &Potential, sh: &Shape, j: f64) -> Result<f64, InputError> {
     } else {
         let ff = FarForm::new(pot, u0, j);
         let f = |th: f64| ff.chi_half(th);
-        for k in 0..rl.len() - 1 {
-            let lo = gl(&f, 0.0, FRAC_PI_2, &rl[k]);
-            let hi = gl(&f, 0.0, FRAC_PI_2, &rl[k + 1]);
+        for k in 0..RULE_SIZES.len() - 1 {
+            let lo = integrate_gl(&f, 0.0, FRAC_PI_2, rule(k));
+            let hi = integrate_gl(&f, 0.0, FRAC_PI_2, rule(k + 1));
             if hi.is_finite() && (hi - lo).abs() <= REL_ANGLE * hi.abs() {
                 return Ok(2.0 * hi);
             }
@@ -659,20 +527,20 @@ fn critical(pot: &Potential, uw: f64, j_captured: Option<f64>) -> Result<Option<
     let p2 = pot.p_inf * pot.p_inf;
     let mut wc = vec![0.0];
     wc.extend_from_slice(&pot.w);
-    let dw = pderiv(&wc);
-    let d2w = pderiv(&dw);
+    let dw = poly::derivative(&wc);
+    let d2w = poly::derivative(&dw);
     // Double root R = R' = 0: j² = w'(u)/(2u) and G(u) = p∞² + w − u w'/2 = 0.
     let mut g = vec![p2];
     g.extend(pot.w.iter().enumerate().map(|(k, &wk)| wk * (1.0 - (k as f64 + 1.0) / 2.0)));
     let mut cands = Vec::new();
-    for u in real_roots(&g, 0.0, cauchy_bound(&g)) {
-        let j2 = peval(&dw, u) / (2.0 * u);
-        if j2 > 0.0 && peval(&d2w, u) - 2.0 * j2 > 0.0 && u < uw {
+    for u in poly::real_roots(&g, 0.0, poly::cauchy_bound(&g)) {
+        let j2 = poly::eval(&dw, u) / (2.0 * u);
+        if j2 > 0.0 && poly::eval(&d2w, u) - 2.0 * j2 > 0.0 && u < uw {
             cands.push(j2.sqrt());
         }
     }
     if uw.is_finite() {
-        let j2 = (p2 + peval(&wc, uw)) / (uw * uw);
+        let j2 = (p2 + poly::eval(&wc, uw)) / (uw * uw);
         if j2 > 0.0 {
             cands.push(j2.sqrt());
         }
@@ -938,7 +806,7 @@ pub fn orbit(gamma: f64, nu: f64, j: f64, chi: &[f64], n: usize) -> Result<EobOr
     let n_half = n.div_ceil(2);
     let odd = n % 2 == 1;
     let denom = if odd { (n_half - 1) as f64 } else { n_half as f64 - 0.5 };
-    let rule = &rules()[0];
+    let r0 = rule(0);
     let mut r_in = Vec::with_capacity(n_half);
     let mut phi_in = Vec::with_capacity(n_half);
     let near = sh.u1.filter(|&u1| u1 - u0 < NEAR_CAPTURE_GAP * u0);
@@ -957,7 +825,7 @@ pub fn orbit(gamma: f64, nu: f64, j: f64, chi: &[f64], n: usize) -> Result<EobOr
         }
         let mut from_peri: Vec<(f64, f64)> = Vec::with_capacity(n_half);
         for &t in pts.iter().rev() {
-            acc += gl(&f, prev_t, t, rule);
+            acc += integrate_gl(&f, prev_t, t, r0);
             prev_t = t;
             from_peri.push((nf.u(t), phi_p - acc));
         }
@@ -969,11 +837,11 @@ pub fn orbit(gamma: f64, nu: f64, j: f64, chi: &[f64], n: usize) -> Result<EobOr
         let ff = FarForm::new(&pot, u0, j);
         let f = |th: f64| ff.dphi(th);
         let th_far = (u_far / u0).asin();
-        let mut acc = gl(&f, 0.0, th_far, &rules()[1]);
+        let mut acc = integrate_gl(&f, 0.0, th_far, rule(1));
         let mut prev = th_far;
         for k in 0..n_half {
             let th = th_far + (FRAC_PI_2 - th_far) * k as f64 / denom;
-            acc += gl(&f, prev, th, rule);
+            acc += integrate_gl(&f, prev, th, r0);
             prev = th;
             r_in.push(1.0 / (u0 * th.sin()));
             phi_in.push(acc);
@@ -995,20 +863,10 @@ pub fn orbit(gamma: f64, nu: f64, j: f64, chi: &[f64], n: usize) -> Result<EobOr
 /// Adaptive Gauss–Legendre (16 vs 24 points) of `f` over [a, b]: relative tolerance `tol`, or
 /// absolute `tol · (b − a) · scale` (scale: a typical size of f).
 fn adaptive(f: &impl Fn(f64) -> f64, a: f64, b: f64, tol: f64, scale: f64, depth: u32) -> Result<f64, InputError> {
-    let rl = rules();
-    let lo = gl(f, a, b, &rl[0]);
-    let hi = gl(f, a, b, &rl[1]);
-    if !hi.is_finite() {
-        return Err(no_conv("EOB orbit: integrand not finite"));
-    }
-    if (hi - lo).abs() <= tol * hi.abs().max((b - a) * scale) {
-        return Ok(hi);
-    }
-    if depth == 0 {
-        return Err(no_conv("EOB orbit: adaptive quadrature"));
-    }
-    let m = 0.5 * (a + b);
-    Ok(adaptive(f, a, m, tol, scale, depth - 1)? + adaptive(f, m, b, tol, scale, depth - 1)?)
+    adaptive_gl(f, a, b, tol, scale, depth, (rule(0), rule(1))).map_err(|e| match e {
+        QuadratureFailure::NotFinite => no_conv("EOB orbit: integrand not finite"),
+        QuadratureFailure::TooDeep => no_conv("EOB orbit: adaptive quadrature"),
+    })
 }
 
 /// Relative tolerance of the captured-orbit quadrature: near the barrier top R(u) is a small
@@ -1022,12 +880,12 @@ fn captured_orbit(sh: &Shape, j: f64, n: usize) -> Result<EobOrbit, InputError> 
     if let Some(ub) = sh.ub {
         u_end = u_end.max(1.25 * ub);
     }
-    let hi = cauchy_bound(r);
-    if let Some(&root) = real_roots(r, 0.0, hi).first() {
+    let hi = poly::cauchy_bound(r);
+    if let Some(&root) = poly::real_roots(r, 0.0, hi).first() {
         u_end = u_end.min(root * (1.0 - 1e-6));
     }
     let u_far = u_far.min(0.5 * u_end);
-    let f = |u: f64| j / peval(r, u).max(0.0).sqrt();
+    let f = |u: f64| j / poly::eval(r, u).max(0.0).sqrt();
     let scale = f(0.0);
     // fine grid
     let k_fine = (4 * n).max(400);

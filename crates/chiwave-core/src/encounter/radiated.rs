@@ -9,6 +9,7 @@
 //! make the switch continuous to ≤ 1e-12 relative (tested).
 
 use super::kinematics::Boost;
+use crate::numeric::poly;
 use std::f64::consts::PI;
 
 /// Relative speed v below which E and I use their small-velocity series.
@@ -87,10 +88,6 @@ pub fn e_of_boost(b: &Boost) -> f64 {
     e_of(b.gamma, b.gamma_m1, b.p_inf)
 }
 
-fn horner(cs: &[f64], x: f64) -> f64 {
-    cs.iter().fold(0.0, |acc, c| acc * x + c)
-}
-
 /// E from γ, x = γ − 1 and p∞. The polynomials are re-expanded in x (exact integer
 /// coefficients) and the logarithms use ln_1p, so that each of f₁, f₂, f₃ keeps full relative
 /// precision near γ = 1; only their intrinsic 1/p³ cancellation remains (≈ 1e-15 at v = 0.3).
@@ -103,9 +100,9 @@ fn e_of(g: f64, x: f64, p: f64) -> f64 {
     }
     let p3 = p * p * p;
     // 210γ⁶ − 552γ⁵ + 339γ⁴ − 912γ³ + 3148γ² − 3336γ + 1151 with γ = 1 + x, etc.
-    let f1 = horner(&[210.0, 708.0, 729.0, -876.0, 76.0, 80.0, 48.0], x) / (48.0 * p3);
-    let f2 = -horner(&[35.0, 200.0, 240.0, 96.0, 16.0], x) / (8.0 * p);
-    let f3 = horner(&[70.0, 420.0, 885.0, 740.0, 172.0, -16.0, -16.0], x) / (16.0 * p3);
+    let f1 = poly::eval_descending(&[210.0, 708.0, 729.0, -876.0, 76.0, 80.0, 48.0], x) / (48.0 * p3);
+    let f2 = -poly::eval_descending(&[35.0, 200.0, 240.0, 96.0, 16.0], x) / (8.0 * p);
+    let f3 = poly::eval_descending(&[70.0, 420.0, 885.0, 740.0, 172.0, -16.0, -16.0], x) / (16.0 * p3);
     // ln((γ+1)/2) = ln(1 + x/2); arccosh γ = ln(γ + p∞) = ln(1 + x + p∞).
     PI * (f1 + f2 * (0.5 * x).ln_1p() + f3 * g * (x + p).ln_1p() / p)
 }

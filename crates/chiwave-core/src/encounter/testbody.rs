@@ -7,6 +7,7 @@
 
 use super::kinematics::Boost;
 use crate::error::InputError;
+use crate::numeric::{cached_rule, Rule};
 use std::f64::consts::PI;
 use std::sync::OnceLock;
 
@@ -130,9 +131,8 @@ pub enum TestBody {
 }
 
 /// Gauss–Legendre rules used by the quadrature (computed once).
-fn rules() -> &'static [(Vec<f64>, Vec<f64>); 2] {
-    static R: OnceLock<[(Vec<f64>, Vec<f64>); 2]> = OnceLock::new();
-    R.get_or_init(|| [crate::numeric::gauss_legendre(12), crate::numeric::gauss_legendre(24)])
+fn rules() -> [&'static Rule; 2] {
+    [cached_rule(12), cached_rule(24)]
 }
 
 /// Exact test-body scattering angle in Schwarzschild at the same γ and j (geodesic quadrature).

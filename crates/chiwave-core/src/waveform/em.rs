@@ -35,6 +35,7 @@
 
 use crate::error::{finite, positive, InputError};
 use crate::numeric::gauss_legendre;
+use crate::numeric::quadrature::adaptive_bisection;
 use crate::special::{x_k0, x_k1};
 use crate::validity::Flag;
 use num_complex::Complex64;
@@ -552,65 +553,6 @@ impl Profiles {
     }
 }
 
-/// Adaptive bisection with a fixed Gauss–Legendre rule for four integrands at once.
-///
-/// Each interval's value is compared with the sum over its two halves; an interval is
-/// accepted when the difference is below its share (by length) of the tolerance for every
-/// component. Returns the integrals and the summed |differences| (an error estimate).
-fn adaptive4(
-    f: &dyn Fn(f64) -> [f64; 4],
-    breaks: &[f64],
-    tol: [f64; 4],
-    rule: &(Vec<f64>, Vec<f64>),
-    max_intervals: usize,
-) -> ([f64; 4], [f64; 4]) {
-    // Value and integral of |f| (the latter sets the rounding floor of the comparison).
-    let quad = |a: f64, b: f64| -> ([f64; 4], [f64; 4]) {
-        let (c, h) = (0.5 * (a + b), 0.5 * (b - a));
-        let mut s = [0.0; 4];
-        let mut sa = [0.0; 4];
-        for (x, w) in rule.0.iter().zip(&rule.1) {
-            let y = f(c + h * x);
-            for k in 0..4 {
-                s[k] += w * y[k];
-                sa[k] += w * y[k].abs();
-            }
-        }
-        (s.map(|x| x * h), sa.map(|x| x * h))
-    };
-    let total = breaks[breaks.len() - 1] - breaks[0];
-    let mut stack: Vec<(f64, f64, [f64; 4])> =
-        breaks.windows(2).filter(|w| w[1] > w[0]).map(|w| (w[0], w[1], quad(w[0], w[1]).0)).collect();
-    let mut sum = [0.0; 4];
-    let mut err = [0.0; 4];
-    let mut count = stack.len();
-    while let Some((a, b, q)) = stack.pop() {
-        let m = 0.5 * (a + b);
-        let (ql, al) = quad(a, m);
-        let (qr, ar) = quad(m, b);
-        let share = (b - a) / total;
-        let mut ok = true;
-        let mut diff = [0.0; 4];
-        for k in 0..4 {
-            diff[k] = (q[k] - ql[k] - qr[k]).abs();
-            if diff[k] > (tol[k] * share).max(ROUNDING_FLOOR * (al[k] + ar[k])) {
-                ok = false;
-            }
-        }
-        if ok || count >= max_intervals || m <= a || m >= b {
-            for k in 0..4 {
-                sum[k] += ql[k] + qr[k];
-                err[k] += diff[k];
-            }
-        } else {
-            count += 1;
-            stack.push((a, m, ql));
-            stack.push((m, b, qr));
-        }
-    }
-    (sum, err)
-}
-
 /// Differences below this multiple of ∫|f| over an interval are rounding, not truncation.
 const ROUNDING_FLOOR: f64 = 1e-14;
 /// Relative tolerance of the cross-term u-integrals (against their Cauchy–Schwarz bounds).
@@ -673,7 +615,7 @@ fn direction_energy(sys: &EmSystem, d: &Dir, prof: &Profiles, rule: &(Vec<f64>, 
             .collect();
         breaks.sort_by(|a, b| a.total_cmp(b));
         breaks.dedup();
-        let (jp, ep) = adaptive4(&f, &breaks, tol.map(|t| 0.5 * t), rule, CROSS_MAX_INTERVALS);
+        let (jp, ep) = adaptive_bisection(&f, &breaks, tol.map(|t| 0.5 * t), rule, CROSS_MAX_INTERVALS, ROUNDING_FLOOR);
         for m in 0..4 {
             j[m] += jp[m];
             jerr[m] += ep[m];

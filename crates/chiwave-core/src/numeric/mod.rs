@@ -1,11 +1,24 @@
-//! Shared numerical tools: Gauss–Legendre rules and the tolerance policy.
+//! Shared numerical tools, used by every observable family: Gauss–Legendre rules (and a cache of
+//! them), fixed, composite and adaptive Gauss–Legendre quadrature ([`quadrature`]), real roots of
+//! polynomials ([`poly`]), and the tolerance policy.
 //!
 //! Sources: Gauss–Legendre quadrature, nodes the zeros of P_n and weights 2/((1 − x²)P_n'(x)²)
 //! (Abramowitz & Stegun 1964, Handbook of Mathematical Functions, eq. 25.4.29); the zeros found
-//! by Newton's method on the three-term Legendre recurrence (common practice).
+//! by Newton's method on the three-term Legendre recurrence (common practice). The other
+//! sources are named in the submodules.
 //!
 //! Tolerance policy (one place): relative errors for quantities that scale, absolute only near
 //! zero. Tests use these constants; a test that needs another bound says why beside it.
+
+pub mod poly;
+pub mod quadrature;
+
+pub use quadrature::integrate_gl;
+
+use std::sync::OnceLock;
+
+/// Nodes and weights of a Gauss–Legendre rule on [-1, 1].
+pub type Rule = (Vec<f64>, Vec<f64>);
 
 /// Relative tolerance for a closed form against an independent quadrature in f64.
 pub const REL_QUADRATURE: f64 = 1e-12;
@@ -30,7 +43,7 @@ pub const REL_TRANSCRIBED: f64 = 1e-11;
 /// let s: f64 = x.iter().zip(&w).map(|(x, w)| w * x.powi(8)).sum();
 /// assert!((s - 2.0 / 9.0).abs() < 1e-15);
 /// ```
-pub fn gauss_legendre(n: usize) -> (Vec<f64>, Vec<f64>) {
+pub fn gauss_legendre(n: usize) -> Rule {
     let n = n.clamp(1, 512);
     let mut x = vec![0.0; n];
     let mut w = vec![0.0; n];
@@ -63,10 +76,24 @@ pub fn gauss_legendre(n: usize) -> (Vec<f64>, Vec<f64>) {
     (x, w)
 }
 
-/// Integrates `f` over [a, b] with an n-point Gauss–Legendre rule.
-pub fn integrate_gl(f: impl Fn(f64) -> f64, a: f64, b: f64, rule: &(Vec<f64>, Vec<f64>)) -> f64 {
-    let (c, h) = (0.5 * (a + b), 0.5 * (b - a));
-    rule.0.iter().zip(&rule.1).map(|(x, w)| w * f(c + h * x)).sum::<f64>() * h
+/// Largest rule size kept by [`cached_rule`].
+pub const MAX_CACHED_RULE: usize = 256;
+
+/// The n-point Gauss–Legendre rule, computed once per n and kept for the life of the program
+/// (the rules used by the hot paths: 12, 16, 24, 32, 48, … 192 nodes).
+///
+/// # Domain
+/// 1 ≤ n ≤ [`MAX_CACHED_RULE`]; n is clamped to that range (callers pass constants).
+///
+/// # Examples
+/// ```
+/// let r = chiwave_core::numeric::cached_rule(24);
+/// assert_eq!(r, &chiwave_core::numeric::gauss_legendre(24));
+/// ```
+pub fn cached_rule(n: usize) -> &'static Rule {
+    static RULES: [OnceLock<Rule>; MAX_CACHED_RULE + 1] = [const { OnceLock::new() }; MAX_CACHED_RULE + 1];
+    let n = n.clamp(1, MAX_CACHED_RULE);
+    RULES[n].get_or_init(|| gauss_legendre(n))
 }
 
 /// Relative difference |a − b| / max(|a|, |b|), 0 when both are 0.
