@@ -489,8 +489,8 @@ fn angle(pot: &Potential, sh: &Shape, j: f64) -> Result<f64, InputError> {
         let mut m = (t_end / 1.5).ceil().max(1.0) as usize;
         for k in 0..5 {
             let (ra, rb) = (rule(k.min(RULE_SIZES.len() - 2)), rule((k + 1).min(RULE_SIZES.len() - 1)));
-            let lo = integrate_panels(&f, 0.0, t_end, m, rule(0)) + integrate_gl(&fo, 0.0, 0.5 * u0, ra);
-            let hi = integrate_panels(&f, 0.0, t_end, m, rule(1)) + integrate_gl(&fo, 0.0, 0.5 * u0, rb);
+            let lo = integrate_panels(f, 0.0, t_end, m, rule(0)) + integrate_gl(fo, 0.0, 0.5 * u0, ra);
+            let hi = integrate_panels(f, 0.0, t_end, m, rule(1)) + integrate_gl(fo, 0.0, 0.5 * u0, rb);
             let chi_lo = 2.0 * lo - PI;
             let chi_hi = 2.0 * hi - PI;
             if chi_hi.is_finite() && (chi_hi - chi_lo).abs() <= REL_ANGLE * chi_hi.abs().max(1.0) {
@@ -503,8 +503,8 @@ fn angle(pot: &Potential, sh: &Shape, j: f64) -> Result<f64, InputError> {
         let ff = FarForm::new(pot, u0, j);
         let f = |th: f64| ff.chi_half(th);
         for k in 0..RULE_SIZES.len() - 1 {
-            let lo = integrate_gl(&f, 0.0, FRAC_PI_2, rule(k));
-            let hi = integrate_gl(&f, 0.0, FRAC_PI_2, rule(k + 1));
+            let lo = integrate_gl(f, 0.0, FRAC_PI_2, rule(k));
+            let hi = integrate_gl(f, 0.0, FRAC_PI_2, rule(k + 1));
             if hi.is_finite() && (hi - lo).abs() <= REL_ANGLE * hi.abs() {
                 return Ok(2.0 * hi);
             }
@@ -825,7 +825,7 @@ pub fn orbit(gamma: f64, nu: f64, j: f64, chi: &[f64], n: usize) -> Result<EobOr
         }
         let mut from_peri: Vec<(f64, f64)> = Vec::with_capacity(n_half);
         for &t in pts.iter().rev() {
-            acc += integrate_gl(&f, prev_t, t, r0);
+            acc += integrate_gl(f, prev_t, t, r0);
             prev_t = t;
             from_peri.push((nf.u(t), phi_p - acc));
         }
@@ -837,11 +837,11 @@ pub fn orbit(gamma: f64, nu: f64, j: f64, chi: &[f64], n: usize) -> Result<EobOr
         let ff = FarForm::new(&pot, u0, j);
         let f = |th: f64| ff.dphi(th);
         let th_far = (u_far / u0).asin();
-        let mut acc = integrate_gl(&f, 0.0, th_far, rule(1));
+        let mut acc = integrate_gl(f, 0.0, th_far, rule(1));
         let mut prev = th_far;
         for k in 0..n_half {
             let th = th_far + (FRAC_PI_2 - th_far) * k as f64 / denom;
-            acc += integrate_gl(&f, prev, th, r0);
+            acc += integrate_gl(f, prev, th, r0);
             prev = th;
             r_in.push(1.0 / (u0 * th.sin()));
             phi_in.push(acc);
