@@ -5,6 +5,8 @@
 //! - [`deflection`]: light (massless) deflection by Schwarzschild, Kerr (equatorial) and
 //!   Reissner–Nordström lenses; weak-field series; strong-deflection limit; PPN.
 //! - [`lensing`]: point-mass lens images, magnifications, time delay; wave-optics amplification.
+//! - [`two_body`]: the two-body input model (masses or ν, γ or v, b or j, charges, physical
+//!   scale), read and validated once for every two-body request.
 //! - [`encounter`]: two-body scattering angle, impulse, radiated energy and angular momentum.
 //! - [`waveform`]: leading-order gravitational and electromagnetic waveforms, memory, spectra.
 //! - [`validity`]: regime flags attached to every result.
@@ -21,6 +23,7 @@ pub mod lensing;
 pub mod numeric;
 pub mod request;
 pub mod special;
+pub mod two_body;
 pub mod units;
 pub mod validity;
 pub mod waveform;

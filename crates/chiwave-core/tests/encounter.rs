@@ -2,7 +2,7 @@
 // Reference values are quoted with every digit the reference script printed.
 #![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
-use chiwave_core::encounter::kinematics::{Boost, Kinematics, Orbit};
+use chiwave_core::encounter::kinematics::{RelativeSpeed, Kinematics, Orbit};
 use chiwave_core::encounter::testbody::{self, TestBody};
 use chiwave_core::encounter::{chi_sweep, nr, pm, radiated, EncounterRequest, EncounterResult, GravityResult, SweepVar};
 use chiwave_core::numeric::{rel_diff, REL_QUADRATURE, REL_ROUNDING, REL_TRANSCRIBED};
@@ -18,7 +18,7 @@ fn grav(json: &str) -> GravityResult {
 }
 
 fn chi_exact(g: f64, j: f64) -> Option<f64> {
-    match testbody::exact(&Boost::from_gamma(g).unwrap(), j).unwrap() {
+    match testbody::exact(&RelativeSpeed::from_gamma(g).unwrap(), j).unwrap() {
         TestBody::Scattered { chi, .. } => Some(chi),
         TestBody::Captured => None,
     }
@@ -28,7 +28,7 @@ fn chi_exact(g: f64, j: f64) -> Option<f64> {
 fn generated_test_body_coefficients_match_sheet() {
     // Encounter sheet §1.1–§1.5 closed forms (VERIFIED there by quadrature at 20 digits).
     for g in [1.0001, 1.01, 1.1, 1.5, 3.0, 10.0, 100.0] {
-        let b = Boost::from_gamma(g).unwrap();
+        let b = RelativeSpeed::from_gamma(g).unwrap();
         let p = b.p_inf;
         let (g2, p2) = (g * g, p * p);
         let sheet = [
@@ -49,8 +49,8 @@ fn generated_test_body_coefficients_match_sheet() {
         assert!(rel_diff(c[0], sheet[0]) < REL_ROUNDING && rel_diff(c[1], sheet[1]) < REL_ROUNDING);
         assert!(rel_diff(c[2], sheet[2]) < REL_ROUNDING && c[3] == 0.0);
     }
-    assert!(testbody::pm_coefficient(0, &Boost::from_gamma(2.0).unwrap()).is_none());
-    assert!(testbody::pm_coefficient(13, &Boost::from_gamma(2.0).unwrap()).is_none());
+    assert!(testbody::pm_coefficient(0, &RelativeSpeed::from_gamma(2.0).unwrap()).is_none());
+    assert!(testbody::pm_coefficient(13, &RelativeSpeed::from_gamma(2.0).unwrap()).is_none());
 }
 
 #[test]
@@ -75,7 +75,7 @@ fn pm_series_converges_to_quadrature() {
     // Independent methods: generated finite-part series vs exact quadrature.
     // The residual after order 5 must be the 6th-order term: (exact − S5)/(2χ₆/j⁶) → 1 + O(1/j).
     for g in [1.2, 1.5, 3.0] {
-        let b = Boost::from_gamma(g).unwrap();
+        let b = RelativeSpeed::from_gamma(g).unwrap();
         let j = 60.0 * b.gamma * b.gamma.max(2.0);
         let ex = chi_exact(g, j).unwrap();
         let s = |n: usize| (1..=n).map(|k| 2.0 * testbody::pm_coefficient(k, &b).unwrap() / j.powi(k as i32)).sum::<f64>();
@@ -92,7 +92,7 @@ fn pm_series_converges_to_quadrature() {
 fn capture_threshold() {
     // mpmath 1.3, dps 40 (tests/reference/encounter_mpmath.py): jcrit from the sheet's r_c formula.
     for (g, want) in [(1.1, 4.724555912615340340181), (1.5, 7.155417527999327028509), (2.0, 9.935828658942964968976), (10.0, 51.8747526167417415118)] {
-        let b = Boost::from_gamma(g).unwrap();
+        let b = RelativeSpeed::from_gamma(g).unwrap();
         let jc = testbody::critical_j(&b);
         assert!(rel_diff(jc, want) < REL_ROUNDING * 10.0, "γ={g}");
         // Bracketing (deflection sheet §5): a turning point just above, none just below.
@@ -102,11 +102,11 @@ fn capture_threshold() {
     // Encounter sheet pitfall 8: γ = 10, j = 50 is captured.
     assert!(chi_exact(10.0, 50.0).is_none());
     // Limits (deflection sheet §5): γ → 1: j_c → 4; γ → ∞: j_c/p∞ → 3√3.
-    assert!((testbody::critical_j(&Boost::from_v(1e-6).unwrap()) - 4.0).abs() < 1e-9);
-    let b = Boost::from_gamma(1e6).unwrap();
+    assert!((testbody::critical_j(&RelativeSpeed::from_v(1e-6).unwrap()) - 4.0).abs() < 1e-9);
+    let b = RelativeSpeed::from_gamma(1e6).unwrap();
     assert!(rel_diff(testbody::critical_j(&b) / b.p_inf, 27f64.sqrt()) < 1e-9);
     // The angle grows without bound towards the separatrix (logarithmic divergence).
-    let b = Boost::from_gamma(1.5).unwrap();
+    let b = RelativeSpeed::from_gamma(1.5).unwrap();
     let jc = testbody::critical_j(&b);
     let (c1, c2) = (chi_exact(1.5, jc * (1.0 + 1e-4)).unwrap(), chi_exact(1.5, jc * (1.0 + 1e-6)).unwrap());
     assert!(c2 > c1 + 2.0, "{c1} {c2}");
@@ -116,7 +116,7 @@ fn capture_threshold() {
 fn newtonian_limit() {
     // Deflection sheet §5: at v = 1e-3, b = 1e6 M (χ_N = π/2) the exact test-body angle differs
     // from the Newtonian 2 arctan(M/(b v²)) by O(v²).
-    let b = Boost::from_v(1e-3).unwrap();
+    let b = RelativeSpeed::from_v(1e-3).unwrap();
     let k = Kinematics::new(1e-9, 1.0, b, Orbit::B(1e6)).unwrap();
     let ex = match testbody::exact(&b, k.j).unwrap() {
         TestBody::Scattered { chi, .. } => chi,
@@ -126,7 +126,7 @@ fn newtonian_limit() {
     assert!((newt - PI / 2.0).abs() < 1e-15); // 2 arctan 1 = π/2 (elementary)
     assert!((ex - newt).abs() < 20.0 * 1e-6 && (ex - newt).abs() > 1e-8, "{}", ex - newt);
     // PN limits of the coefficients (sheet §5.1): χ₁ p → 1, χ₃ p³ → −1/3.
-    let b = Boost::from_v(1e-5).unwrap();
+    let b = RelativeSpeed::from_v(1e-5).unwrap();
     let c = pm::coefficients(&b, 0.25);
     assert!((c[0] * b.p_inf - 1.0).abs() < 1e-9);
     assert!((c[2] * b.p_inf.powi(3) + 1.0 / 3.0).abs() < 1e-8);
@@ -139,18 +139,18 @@ fn newtonian_limit() {
 fn cbar_and_i_match_mpmath() {
     // mpmath 1.3, dps 40 (tests/reference/encounter_mpmath.py).
     for (g, want) in [(1.000001, 4.000036000054400032457), (1.01, 4.36547246603928066358), (1.5, 39.71405130240384248331), (3.0, 567.4939522997381987059)] {
-        let got = pm::cbar(&Boost::from_gamma(g).unwrap());
+        let got = pm::cbar(&RelativeSpeed::from_gamma(g).unwrap());
         // 1e-11 at γ − 1 = 1e-6: γ itself carries a 1e-16/1e-6 relative error in γ − 1.
         assert!(rel_diff(got, want) < 1e-11, "γ={g}: {got} vs {want}");
     }
     // Sheet §1.3 series check: C̄ = 4 + 18p² + (91/10)p⁴ + O(p⁶).
-    let b = Boost::from_v(1e-2).unwrap();
+    let b = RelativeSpeed::from_v(1e-2).unwrap();
     let p2 = b.p_inf * b.p_inf;
     assert!(((pm::cbar(&b) - 4.0 - 18.0 * p2) / (p2 * p2) - 9.1).abs() < 0.05);
     for (v, want) in [(0.001, 0.000001600000914286349206834), (0.05, 0.004005724225326923596512), (0.3, 0.1519028838317368669578), (0.5, 0.4694420893304472838762), (0.9, 2.911588120998641780265), (0.99, 7.292258727889993285383)] {
         assert!(rel_diff(radiated::i_function(v), want) < 1e-13, "v={v}");
         // The boost form (arctanh v = ln(γ + p∞)) agrees.
-        assert!(rel_diff(radiated::i_of_boost(&Boost::from_v(v).unwrap()), want) < 1e-12, "v={v}");
+        assert!(rel_diff(radiated::i_of_speed(&RelativeSpeed::from_v(v).unwrap()), want) < 1e-12, "v={v}");
     }
     assert_eq!(radiated::i_function(0.0), 0.0);
     assert!(radiated::i_function(1.0).is_nan() && radiated::i_function(f64::NAN).is_nan());
@@ -187,7 +187,7 @@ fn series_switch_is_continuous() {
     // E(v = 0.3) = 2.619987847412325328255, I(0.3) = 0.1519028838317368669578.
     let vs = radiated::SERIES_SWITCH_V;
     let below = f64::from_bits(vs.to_bits() - 1);
-    let (eb, ea) = (radiated::e_of_boost(&Boost::from_v(below).unwrap()), radiated::e_of_boost(&Boost::from_v(vs).unwrap()));
+    let (eb, ea) = (radiated::e_of_speed(&RelativeSpeed::from_v(below).unwrap()), radiated::e_of_speed(&RelativeSpeed::from_v(vs).unwrap()));
     assert!(rel_diff(eb, ea) < 1e-12, "{eb} {ea}");
     assert!(rel_diff(ea, 2.619987847412325328255) < 1e-13, "{ea} {:e}", rel_diff(ea, 2.619987847412325328255));
     assert!(rel_diff(eb, 2.619987847412325328255) < 1e-13);
@@ -203,7 +203,7 @@ fn series_switch_is_continuous() {
     let f2 = -(35.0 * g.powi(4) + 60.0 * g.powi(3) - 150.0 * g * g + 76.0 * g - 5.0) / (8.0 * p);
     let f3 = (2.0 * g * g - 3.0) * (35.0 * g.powi(4) - 30.0 * g * g + 11.0) / (16.0 * p.powi(3));
     let closed = PI * (f1 + f2 * ((g + 1.0) / 2.0).ln() + f3 * g * g.acosh() / p);
-    assert!(rel_diff(radiated::e_of_boost(&Boost::from_v(v).unwrap()), closed) < 1e-12);
+    assert!(rel_diff(radiated::e_of_speed(&RelativeSpeed::from_v(v).unwrap()), closed) < 1e-12);
     let i_closed = -16.0 / 3.0 + 2.0 / (v * v) + 2.0 * (3.0 * v * v - 1.0) * v.atanh() / v.powi(3);
     assert!(rel_diff(radiated::i_function(v), i_closed) < 1e-12);
 }
@@ -211,15 +211,15 @@ fn series_switch_is_continuous() {
 #[test]
 fn small_velocity_limits() {
     // Encounter sheet §3.1: E/(π v) → 37/15 (Newtonian quadrupole on a straight line).
-    let b = Boost::from_v(1e-5).unwrap();
-    assert!(rel_diff(radiated::e_of_boost(&b) / (PI * b.v), 37.0 / 15.0) < 1e-9);
+    let b = RelativeSpeed::from_v(1e-5).unwrap();
+    assert!(rel_diff(radiated::e_of_speed(&b) / (PI * b.v), 37.0 / 15.0) < 1e-9);
     // Sheet §3.1 next PN coefficients 2393/840 v³ (from the formula, matching the PN series).
-    let b = Boost::from_v(1e-2).unwrap();
-    let e = radiated::e_of_boost(&b) / PI;
+    let b = RelativeSpeed::from_v(1e-2).unwrap();
+    let e = radiated::e_of_speed(&b) / PI;
     assert!(((e - 37.0 / 15.0 * b.v) / b.v.powi(3) - 2393.0 / 840.0).abs() < 1e-3);
     // Sheet §3.2: J_rad → (16/5) G² m1² m2² v²/(M b) (straight-line quadrupole integral).
     let r = grav(r#"{"m1": 1, "m2": 3, "v": 1e-4, "b": 1e12}"#);
-    let (nu, v, bb) = (r.nu, r.kinematics.boost.v, r.b_over_gm);
+    let (nu, v, bb) = (r.nu, r.kinematics.speed.v, r.b_over_gm);
     let j_rad = r.j_rad * r.kinematics.j_total;
     assert!(rel_diff(j_rad, 16.0 / 5.0 * nu * nu * v * v / bb) < 1e-7, "{}", j_rad / (16.0 / 5.0 * nu * nu * v * v / bb));
     // and E_rad → (37π/15) G³ m1² m2² v/b³ (sheet §3.1), h → 1.
@@ -233,7 +233,7 @@ fn high_energy_limit() {
     for nu in [0.25, 0.1, 0.01] {
         let mut prev = f64::INFINITY;
         for g in [1e2, 1e4, 1e6] {
-            let b = Boost::from_gamma(g).unwrap();
+            let b = RelativeSpeed::from_gamma(g).unwrap();
             let c = pm::coefficients(&b, nu);
             let tot = (c[2] + c[3]) / g.powi(3);
             let dev = (tot - 16.0 / 3.0).abs();
@@ -255,7 +255,7 @@ fn high_energy_limit() {
 fn mass_polynomiality() {
     // Damour 2019 (arXiv:1912.02139; sheet §1.3): h²χ₃ is linear in ν; hχ₂ is ν-independent.
     for g in [1.05, 1.5, 4.0] {
-        let b = Boost::from_gamma(g).unwrap();
+        let b = RelativeSpeed::from_gamma(g).unwrap();
         let f = |nu: f64| {
             let h2 = 1.0 + 2.0 * nu * (g - 1.0);
             let c = pm::coefficients(&b, nu);
@@ -282,7 +282,7 @@ fn impulse_on_shell_and_exact_conservative() {
         for b in [100.0, 200.0, 400.0, 800.0] {
             let r = impulse_for(1.0, 3.0, g, b);
             let k = &r.kinematics;
-            let (m1, p) = (k.m1, k.boost.p_inf);
+            let (m1, p) = (k.m1, k.speed.p_inf);
             // Rest frame of body 2: (m1 γ + ΔE)² − (m1 p∞ + Δp∥)² − Δp⊥² − m1² = O(G⁴).
             let i = r.impulse.rest2;
             let res = (m1 * g + i.energy).powi(2) - (m1 * p + i.longitudinal).powi(2) - i.transverse.powi(2) - m1 * m1;
@@ -438,7 +438,7 @@ fn impulse_on_shell_order_by_order() {
     for (m1, m2, g, b) in [(1.0, 3.0, 1.1, 50.0), (0.3, 0.7, 2.5, 400.0), (0.5, 0.5, 20.0, 1e4)] {
         let r = impulse_for(m1, m2, g, b);
         let k = &r.kinematics;
-        let (m1, m2, p, b) = (k.m1, k.m2, k.boost.p_inf, k.b_over_gm);
+        let (m1, m2, p, b) = (k.m1, k.m2, k.speed.p_inf, k.b_over_gm);
         let q1 = 2.0 * m1 * m2 * (2.0 * g * g - 1.0) / (p * b);
         let q2 = 0.75 * PI * (5.0 * g * g - 1.0) * m1 * m2 / (p * b * b);
         let want = q1 * q1 + 2.0 * q1 * q2;
@@ -447,7 +447,7 @@ fn impulse_on_shell_order_by_order() {
         assert!(rel_diff(2.0 * m1 * (c.c_u1 + g * c.c_u2), want) < 1e-12, "body 1");
         assert!(rel_diff(-2.0 * m2 * (g * c.c_u1 + c.c_u2), want) < 1e-12, "body 2");
         let rr = r.covariant.radiative;
-        let eps = k.nu * k.nu * radiated::e_of_boost(&k.boost) / b.powi(3);
+        let eps = k.nu * k.nu * radiated::e_of_speed(&k.speed) / b.powi(3);
         assert!((rr.c_u1 + g * rr.c_u2).abs() <= 1e-15 * rr.c_u2.abs() * g, "u1·Δp1^rad");
         assert!(rel_diff(g * rr.c_u1 + rr.c_u2, -eps) < 1e-12, "u2·Δp1^rad");
     }

@@ -3,7 +3,7 @@
 #![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
 use chiwave_core::encounter::em::{self, Darwin};
-use chiwave_core::encounter::kinematics::Boost;
+use chiwave_core::encounter::kinematics::RelativeSpeed;
 use chiwave_core::encounter::{EmResult, EncounterRequest, EncounterResult};
 use chiwave_core::numeric::{rel_diff, REL_QUADRATURE, REL_ROUNDING};
 use chiwave_core::validity::Level;
@@ -18,7 +18,7 @@ fn em_result(json: &str) -> EmResult {
 }
 
 fn darwin(g: f64, k: f64) -> Option<f64> {
-    match em::darwin(&Boost::from_gamma(g).unwrap(), k) {
+    match em::darwin(&RelativeSpeed::from_gamma(g).unwrap(), k) {
         Darwin::Scattered { chi } => Some(chi),
         Darwin::FallToCentre => None,
     }
@@ -59,7 +59,7 @@ fn darwin_expansion_matches_pl_coefficients() {
     // Series vs exact (encounter sheet §4.1–§4.2): χ − 2(e₁κ + (π/4)κ² + e₃κ³) = O(κ⁴) for a
     // test charge (h = 1): halving κ divides the remainder by ≈ 16.
     for g in [1.1, 1.5, 3.0] {
-        let b = Boost::from_gamma(g).unwrap();
+        let b = RelativeSpeed::from_gamma(g).unwrap();
         for sign in [1.0, -1.0] {
             let rem = |k: f64| darwin(g, k).unwrap() - 2.0 * (em::e1(&b) * k + em::e2(1.0) * k * k + em::e3_test(&b) * k.powi(3));
             let (r1, r2) = (rem(sign * 0.02), rem(sign * 0.01));
@@ -75,7 +75,7 @@ fn rutherford_limit() {
     // and κ = k/J this is |κ| γ/v. Deviation O(v²): within 8e-5 at v = 0.01 there.
     let mut prev = f64::INFINITY;
     for v in [0.02, 0.01, 0.005] {
-        let b = Boost::from_v(v).unwrap();
+        let b = RelativeSpeed::from_v(v).unwrap();
         let k = 0.5 * v; // tan(θ/2) ≈ 0.5
         for sign in [1.0, -1.0] {
             let chi = match em::darwin(&b, sign * k) {
@@ -103,7 +103,7 @@ fn em_request_geometric() {
     assert!(a.kappa < 0.0 && a.chi.pl1 > 0.0 && a.chi_test_exact.unwrap() > 0.0 && a.impulse.cm.transverse < 0.0);
     // κ = q1 q2/J, J = p b = ν p∞ b/h (sheet §0, §4).
     let k = &r.kinematics;
-    assert!(rel_diff(r.kappa, 6.0 / (k.nu * k.boost.p_inf * 1000.0 / k.h)) < REL_ROUNDING);
+    assert!(rel_diff(r.kappa, 6.0 / (k.nu * k.speed.p_inf * 1000.0 / k.h)) < REL_ROUNDING);
     // 1PL: χ = −2γκ/p∞ (sheet §4.1).
     assert!(rel_diff(r.chi.pl1, -2.0 * 1.5 * r.kappa / 1.25f64.sqrt()) < REL_ROUNDING);
     // Radiation reaction always increases χ (sheet §4.2: δχ_rr > 0).

@@ -369,7 +369,7 @@ fn request_validation() {
         assert_eq!(field(j), "b", "b = {b}");
     }
     assert_eq!(field(base(r#","distance":"1Mpc""#)), "distance");
-    assert_eq!(field(base(r#","v":0.5"#)), "gamma");
+    assert_eq!(field(base(r#","v":0.5"#)), "v"); // gamma and v both given: the two-body model names v, as for the encounter
     assert_eq!(field(r#"{"m1":0.5,"m2":0.5,"gamma":1.0,"b":20,"theta":1.0,"phi":0.5,"u_min":-10,"u_max":10}"#.into()), "gamma");
     assert_eq!(field(r#"{"m1":0.5,"m2":0.5,"gamma":1.5,"b":20,"theta":4.0,"phi":0.5,"u_min":-10,"u_max":10}"#.into()), "theta");
     assert_eq!(field(r#"{"m1":0.5,"m2":0.5,"gamma":1.5,"b":20,"theta":1.0,"phi":0.5,"u_min":10,"u_max":-10}"#.into()), "u_max");

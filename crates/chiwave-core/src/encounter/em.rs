@@ -7,11 +7,11 @@
 //! q1 q2 → q1 q2/(4π ε0). Gravity is not included in this force law.
 //! χ/2 = Σ e_n κⁿ; χ > 0 for attraction, < 0 for like charges.
 
-use super::kinematics::Boost;
+use super::kinematics::RelativeSpeed;
 use std::f64::consts::PI;
 
 /// e₁ = −γ/p∞ (encounter sheet §4.1; VERIFIED from the Darwin solution).
-pub fn e1(b: &Boost) -> f64 {
+pub fn e1(b: &RelativeSpeed) -> f64 {
     -b.gamma / b.p_inf
 }
 
@@ -24,7 +24,7 @@ pub fn e2(h: f64) -> f64 {
 /// Conservative test-charge e₃^test = −γ(2γ² − 3)/(3p∞³) (encounter sheet §4.2, VERIFIED from
 /// Darwin). The two-body ν-dependent part (h²e₃ = e₃^test + νX(γ), arXiv:2109.05994,
 /// 2305.08981) is **not included** (not transcribed on the sheet).
-pub fn e3_test(b: &Boost) -> f64 {
+pub fn e3_test(b: &RelativeSpeed) -> f64 {
     -b.gamma * (2.0 * b.gamma * b.gamma - 3.0) / (3.0 * b.p_inf.powi(3))
 }
 
@@ -33,7 +33,7 @@ pub fn e3_test(b: &Boost) -> f64 {
 ///
 /// Source: encounter sheet §4.2, DERIVED by linear response from the ALD angular-momentum loss;
 /// VERIFIED there in the test-charge limit against a Landau–Lifshitz integration.
-pub fn delta_chi_rr(b: &Boost, q1: f64, q2: f64, m1: f64, m2: f64, e: f64, j_total: f64) -> f64 {
+pub fn delta_chi_rr(b: &RelativeSpeed, q1: f64, q2: f64, m1: f64, m2: f64, e: f64, j_total: f64) -> f64 {
     let qq = q1 * q2;
     4.0 / 3.0 * b.gamma * b.gamma * qq * qq * (q1 * q1 * m2 * m2 + q2 * q2 * m1 * m1) / (e * e * j_total.powi(3))
 }
@@ -41,7 +41,7 @@ pub fn delta_chi_rr(b: &Boost, q1: f64, q2: f64, m1: f64, m2: f64, e: f64, j_tot
 /// Mechanical angular momentum radiated at O(e⁴),
 /// J_rad = −(4/3) q1 q2 γ m1 m2 (q1²/m1² + q2²/m2²)/(E b); sign of −q1 q2 (encounter sheet §4.2,
 /// DERIVED from the ALD torque).
-pub fn j_rad(b: &Boost, q1: f64, q2: f64, m1: f64, m2: f64, e: f64, b_len: f64) -> f64 {
+pub fn j_rad(b: &RelativeSpeed, q1: f64, q2: f64, m1: f64, m2: f64, e: f64, b_len: f64) -> f64 {
     -4.0 / 3.0 * q1 * q2 * b.gamma * m1 * m2 * (q1 * q1 / (m1 * m1) + q2 * q2 / (m2 * m2)) / (e * b_len)
 }
 
@@ -69,13 +69,13 @@ pub enum Darwin {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::encounter::{kinematics::Boost, em::{darwin, Darwin}};
-/// let b = Boost::from_gamma(1.5).unwrap();
+/// use chiwave_core::encounter::{kinematics::RelativeSpeed, em::{darwin, Darwin}};
+/// let b = RelativeSpeed::from_gamma(1.5).unwrap();
 /// // mpmath 1.3, dps 40, raw orbit quadrature (tests/reference/encounter_mpmath.py): 0.9887771189500707
 /// let Darwin::Scattered { chi } = darwin(&b, -0.3) else { panic!("expected scattering") };
 /// assert!((chi - 0.9887771189500707).abs() < 1e-14);
 /// ```
-pub fn darwin(b: &Boost, kappa: f64) -> Darwin {
+pub fn darwin(b: &RelativeSpeed, kappa: f64) -> Darwin {
     let (g, p) = (b.gamma, b.p_inf);
     let k2 = kappa * kappa;
     if kappa <= -1.0 {
@@ -118,14 +118,14 @@ fn atanh_over(z: f64) -> f64 {
 /// Leading-order radiated energy of a test charge (q1, m1) passing a fixed charge q2, rest frame
 /// of body 2: E_rad = π q1⁴ q2² (3γ² + 1)/(12 m1² v b³) (encounter sheet §4.4, VERIFIED there
 /// against a Landau–Lifshitz integration).
-pub fn e_rad_test(b: &Boost, q1: f64, q2: f64, m1: f64, b_len: f64) -> f64 {
+pub fn e_rad_test(b: &RelativeSpeed, q1: f64, q2: f64, m1: f64, b_len: f64) -> f64 {
     PI * q1.powi(4) * q2 * q2 * (3.0 * b.gamma * b.gamma + 1.0) / (12.0 * m1 * m1 * b.v * b_len.powi(3))
 }
 
 /// Two-body non-relativistic electric-dipole radiated energy,
 /// E_rad = π q1² q2² (q1/m1 − q2/m2)²/(3 v b³) (encounter sheet §4.4, VERIFIED analytically on a
 /// straight line). Valid for v ≪ 1; vanishes for equal q/m.
-pub fn e_rad_dipole(b: &Boost, q1: f64, q2: f64, m1: f64, m2: f64, b_len: f64) -> f64 {
+pub fn e_rad_dipole(b: &RelativeSpeed, q1: f64, q2: f64, m1: f64, m2: f64, b_len: f64) -> f64 {
     let d = q1 / m1 - q2 / m2;
     PI * q1 * q1 * q2 * q2 * d * d / (3.0 * b.v * b_len.powi(3))
 }

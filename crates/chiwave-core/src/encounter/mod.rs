@@ -28,7 +28,6 @@
 pub mod em;
 pub mod eob;
 pub mod impulse;
-pub mod kinematics;
 pub mod nr;
 pub mod pm;
 pub mod radiated;
@@ -37,7 +36,9 @@ pub mod testbody;
 use crate::error::InputError;
 use crate::units::{self, Quantity};
 use crate::validity::{Flag, Level};
-use kinematics::{Boost, Kinematics, Orbit};
+pub use crate::two_body::kinematics;
+pub use crate::two_body::CHARGE_MAX;
+use crate::two_body::{ChargeUse, Kinematics, NuOrder, Orbit, TwoBodyInput, TwoBodySystem};
 use serde::{Deserialize, Serialize};
 use std::collections::BTreeMap;
 
@@ -82,134 +83,53 @@ pub struct EncounterRequest {
     pub q2: Option<Quantity>,
 }
 
-/// A validated encounter: kinematics plus the physical scale when masses had units.
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct Setup {
-    pub kin: Kinematics,
-    /// Physical scale, when the masses were given with units.
-    pub scale: Option<Scale>,
-    /// Charges in geometric Gaussian units q/(√G M) (EM only).
-    pub charges: Option<(f64, f64)>,
-}
-
-/// SI scale of a physical encounter.
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct Scale {
-    /// M = m1 + m2 in kg.
-    pub m_kg: f64,
-    /// G M / c² in metres.
-    pub length_m: f64,
-}
-
-impl Scale {
-    fn from_gm(gm: f64) -> Self {
-        Scale { m_kg: gm / units::codata2018::G, length_m: gm / (units::codata2018::C * units::codata2018::C) }
-    }
-}
-
-/// Largest accepted |q|/(√G M) (geometric Gaussian charge).
-pub const CHARGE_MAX: f64 = 1e40;
+/// The former name of the validated system ([`TwoBodySystem`]).
+#[deprecated(note = "use two_body::TwoBodySystem")]
+pub type Setup = TwoBodySystem;
 
 impl EncounterRequest {
+    /// The two-body fields of the request.
+    pub fn two_body(&self) -> TwoBodyInput<'_> {
+        TwoBodyInput {
+            m1: self.m1.as_ref(),
+            m2: self.m2.as_ref(),
+            nu: self.nu,
+            total_mass: None,
+            gamma: self.gamma,
+            v: self.v.as_ref(),
+            b: self.b.as_ref(),
+            j: self.j,
+            q1: self.q1.as_ref(),
+            q2: self.q2.as_ref(),
+        }
+    }
+
     /// Validates the request and derives the kinematics; `orbit_override` replaces b / j (sweeps).
     ///
     /// # Errors
-    /// [`InputError`] naming the field: missing or doubly given inputs, units that do not fit
-    /// (a physical b or charge needs physical masses), values out of range
-    /// (0 < ν ≤ 1/4, 1 < γ ≤ 1e6, v ≥ 1e-8 c, 1e-6 ≤ b/(GM), j ≤ 1e60, |q|/(√G M) ≤ 1e40).
-    pub fn setup_with(&self, orbit_override: Option<Orbit>) -> Result<Setup, InputError> {
-        // Masses.
-        let (m1, m2, gm_total) = match (&self.nu, &self.m1, &self.m2) {
-            (Some(_), Some(_), _) | (Some(_), _, Some(_)) => {
-                return Err(InputError::Inconsistent { field: "nu", reason: "give either nu or the masses m1 and m2, not both".into() })
-            }
-            (Some(nu), None, None) => {
-                let (a, b) = Kinematics::masses_from_nu(*nu)?;
-                (a, b, None)
-            }
-            (None, Some(q1), Some(q2)) => {
-                let a = units::parse_mass("m1", q1)?;
-                let b = units::parse_mass("m2", q2)?;
-                match (a, b) {
-                    (units::Mass::Physical { gm: g1 }, units::Mass::Physical { gm: g2 }) => (g1, g2, Some(g1 + g2)),
-                    (units::Mass::Geometric(x), units::Mass::Geometric(y)) => (x, y, None),
-                    _ => {
-                        return Err(InputError::Inconsistent {
-                            field: "m2",
-                            reason: "give both masses with units (e.g. 1.4Msun) or both as bare numbers".into(),
-                        })
-                    }
-                }
-            }
-            (None, None, _) => return Err(InputError::Missing { field: "m1", hint: "give m1 and m2 (e.g. 10Msun), or nu (0 < ν ≤ 1/4)".into() }),
-            (None, Some(_), None) => return Err(InputError::Missing { field: "m2", hint: "give m2 as well (e.g. 10Msun), or use nu".into() }),
+    /// [`InputError`] naming the field: the two-body model's errors ([`TwoBodyInput::validate`],
+    /// with ν giving m1 ≤ m2), and for `force: "em"` the coupling |κ| = |q1 q2|/J ≤ 1e6
+    /// (field `q2`).
+    pub fn setup_with(&self, orbit_override: Option<Orbit>) -> Result<TwoBodySystem, InputError> {
+        let charges = match self.force {
+            Force::Gravity => ChargeUse::Forbidden,
+            Force::Em => ChargeUse::Required,
         };
-        let scale = gm_total.map(Scale::from_gm);
-        if let Some(s) = scale {
-            if !(s.length_m.is_finite() && s.length_m > 0.0) {
-                return Err(InputError::OutOfRange { field: "m1", value: s.m_kg, allowed: "a total mass whose GM/c² is finite".into() });
+        let s = self.two_body().validate(NuOrder::LighterFirst, charges, orbit_override)?;
+        if let Some((q1, q2)) = s.charges {
+            let kappa = q1 * q2 / s.kin.j_total;
+            if !kappa.is_finite() || kappa.abs() > 1e6 {
+                return Err(InputError::OutOfRange { field: "q2", value: kappa, allowed: "|κ| = |q1 q2|/(J c) ≤ 1e6 (Gaussian)".into() });
             }
         }
-        // Speed.
-        let boost = match (&self.gamma, &self.v) {
-            (Some(_), Some(_)) => return Err(InputError::Inconsistent { field: "v", reason: "give either gamma or v, not both".into() }),
-            (Some(g), None) => Boost::from_gamma(*g)?,
-            (None, Some(q)) => {
-                let (x, _) = q.split("v")?;
-                let beta = units::parse_speed("v", q).map_err(|e| match e {
-                    InputError::OutOfRange { field, .. } => InputError::OutOfRange { field, value: x, allowed: "0 < v < c (299792.458 km/s); bare numbers are fractions of c".into() },
-                    other => other,
-                })?;
-                Boost::from_v(beta)?
-            }
-            (None, None) => return Err(InputError::Missing { field: "gamma", hint: "give gamma (> 1) or v (e.g. 0.1 or 300km/s)".into() }),
-        };
-        // Orbit.
-        let orbit = match orbit_override {
-            Some(o) => o,
-            None => match (&self.b, &self.j) {
-                (Some(_), Some(_)) => return Err(InputError::Inconsistent { field: "j", reason: "give either b or j, not both".into() }),
-                (Some(q), None) => {
-                    let l = units::parse_length("b", q)?;
-                    Orbit::B(l.in_units_of("b", scale.map(|s| s.length_m))?)
-                }
-                (None, Some(j)) => Orbit::J(*j),
-                (None, None) => return Err(InputError::Missing { field: "b", hint: "give b (e.g. 100, 1au) or j = J/(G m1 m2)".into() }),
-            },
-        };
-        let kin = Kinematics::new(m1, m2, boost, orbit)?;
-        // Charges.
-        let charges = match self.force {
-            Force::Gravity => {
-                for (f, q) in [("q1", &self.q1), ("q2", &self.q2)] {
-                    if q.is_some() {
-                        return Err(InputError::Inconsistent { field: f, reason: "charges are used only with force \"em\"".into() });
-                    }
-                }
-                None
-            }
-            Force::Em => {
-                let q1 = charge("q1", self.q1.as_ref(), scale)?;
-                let q2 = charge("q2", self.q2.as_ref(), scale)?;
-                let kappa = q1 * q2 / kin.j_total;
-                if !kappa.is_finite() || kappa.abs() > 1e6 {
-                    return Err(InputError::OutOfRange {
-                        field: "q2",
-                        value: kappa,
-                        allowed: "|κ| = |q1 q2|/(J c) ≤ 1e6 (Gaussian)".into(),
-                    });
-                }
-                Some((q1, q2))
-            }
-        };
-        Ok(Setup { kin, scale, charges })
+        Ok(s)
     }
 
     /// Validates the request ([`EncounterRequest::setup_with`] without override).
     ///
     /// # Errors
     /// As [`EncounterRequest::setup_with`].
-    pub fn setup(&self) -> Result<Setup, InputError> {
+    pub fn setup(&self) -> Result<TwoBodySystem, InputError> {
         self.setup_with(None)
     }
 
@@ -234,26 +154,6 @@ impl EncounterRequest {
             Force::Em => EncounterResult::Em(Box::new(electromagnetic(&s)?)),
         })
     }
-}
-
-fn charge(field: &'static str, q: Option<&Quantity>, scale: Option<Scale>) -> Result<f64, InputError> {
-    let q = q.ok_or_else(|| InputError::Missing { field, hint: "give the charge (e.g. 1e, -1e-9C, 3statC, or a bare number in units of √G M)".into() })?;
-    let x = match units::parse_charge(field, q)? {
-        units::Charge::Geometric(x) => x,
-        c @ units::Charge::Gaussian { .. } => match (c.length_m(), scale) {
-            (Some(l), Some(s)) => l / s.length_m,
-            _ => {
-                return Err(InputError::Inconsistent {
-                    field,
-                    reason: "a charge with a unit needs masses with units (e.g. 1.67e-27kg)".into(),
-                })
-            }
-        },
-    };
-    if !x.is_finite() || x.abs() > CHARGE_MAX {
-        return Err(InputError::OutOfRange { field, value: x, allowed: format!("|q|/(√G M) ≤ {CHARGE_MAX:e}") });
-    }
-    Ok(x)
 }
 
 /// The cumulative PM angles (radians). JSON keys `1pm`, `2pm`, `3pm_conservative`, `3pm`.
@@ -542,9 +442,9 @@ fn common_velocity_flag(v: f64) -> Flag {
 ///
 /// # Errors
 /// [`InputError::NoConvergence`] from the test-body quadrature self-check.
-pub fn gravity(s: &Setup) -> Result<GravityResult, InputError> {
+pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
     let k = &s.kin;
-    let b = &k.boost;
+    let b = &k.speed;
     let c = pm::coefficients(b, k.nu);
     let angles = pm::cumulative_angles(&c, k.j);
     let chi_newtonian = pm::chi_newtonian(k.b_over_gm, b.v);
@@ -570,7 +470,7 @@ pub fn gravity(s: &Setup) -> Result<GravityResult, InputError> {
         }
     };
     // Radiation.
-    let e_function = radiated::e_of_boost(b);
+    let e_function = radiated::e_of_speed(b);
     let e_rad = k.nu * k.nu * e_function / (k.h * k.b_over_gm.powi(3));
     let p_rad_cm = radiated::p_rad_cm(b, k.m1, k.m2, k.p_cm, k.b_over_gm);
     let j_rad = radiated::j_rad_over_j(b, k.nu, k.h, k.j);
@@ -641,7 +541,7 @@ pub fn gravity(s: &Setup) -> Result<GravityResult, InputError> {
             "The 3PM term is comparable with χ: the series is not converging here.",
         ],
     ));
-    let physical = s.scale.map(|sc| {
+    let physical = s.physical.map(|sc| {
         use units::codata2018::{C, HBAR};
         let mc = sc.m_kg * C;
         let e_unit = sc.m_kg * C * C;
@@ -706,10 +606,10 @@ pub fn gravity(s: &Setup) -> Result<GravityResult, InputError> {
 ///
 /// # Errors
 /// [`InputError::Missing`] if the setup carries no charges.
-pub fn electromagnetic(s: &Setup) -> Result<EmResult, InputError> {
+pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
     let (q1, q2) = s.charges.ok_or_else(|| InputError::Missing { field: "q1", hint: "force \"em\" needs q1 and q2".into() })?;
     let k = &s.kin;
-    let b = &k.boost;
+    let b = &k.speed;
     let kappa = q1 * q2 / k.j_total;
     let (e1, e2, e3) = (em::e1(b), em::e2(k.h), em::e3_test(b));
     let rr = em::delta_chi_rr(b, q1, q2, k.m1, k.m2, k.e, k.j_total);
@@ -786,7 +686,7 @@ pub fn electromagnetic(s: &Setup) -> Result<EmResult, InputError> {
             "v close to c: the non-relativistic dipole E_rad does not apply; use the test-charge e_rad.",
         ],
     ));
-    let physical = s.scale.map(|sc| {
+    let physical = s.physical.map(|sc| {
         use units::codata2018::{C, EPSILON0, G, HBAR};
         let e_unit = sc.m_kg * C * C;
         // q_SI = q̃ √(4π ε0 G) M.
@@ -921,7 +821,7 @@ pub fn chi_sweep(req: &EncounterRequest, var: SweepVar, min: f64, max: f64, n: u
         SweepVar::J => Orbit::J(x),
     };
     let s0 = req.setup_with(Some(orbit_at(min)))?;
-    let b = s0.kin.boost;
+    let b = s0.kin.speed;
     let nu = s0.kin.nu;
     let c = pm::coefficients(&b, nu);
     let chi_e = [c[0], c[1], c[2] + c[3]];

@@ -8,7 +8,7 @@
 //! at finite separation as asymptotic E and J is standard practice (Damour et al. 2014,
 //! arXiv:1402.7307) but an approximation (sheet pitfall 9).
 
-use super::kinematics::{Boost, Kinematics, Orbit};
+use super::kinematics::{RelativeSpeed, Kinematics, Orbit};
 use super::{eob, pm, testbody, PmAngles};
 use crate::error::InputError;
 use serde::Serialize;
@@ -108,7 +108,7 @@ pub fn compare(rows: &[NrRow]) -> Result<Vec<NrComparison>, InputError> {
                 return Err(bad("sigma_chi", r.sigma_chi, "finite χ and σχ ≥ 0"));
             }
             let h = r.e_over_m;
-            let boost = Boost::from_gamma_m1("E/M", (h - 1.0) * (h + 1.0) / (2.0 * r.nu))?;
+            let boost = RelativeSpeed::from_gamma_m1("E/M", (h - 1.0) * (h + 1.0) / (2.0 * r.nu))?;
             let (m1, m2) = Kinematics::masses_from_nu(r.nu)?;
             let kin = Kinematics::new(m1, m2, boost, Orbit::J(r.j_over_m2 / r.nu))?;
             let c = pm::coefficients(&boost, r.nu);

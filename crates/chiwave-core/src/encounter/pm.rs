@@ -5,7 +5,7 @@
 //! The 3PM value is given both conservative and with radiation reaction; only the sum is
 //! physical at high energy (pitfall 5).
 
-use super::kinematics::Boost;
+use super::kinematics::RelativeSpeed;
 use std::f64::consts::PI;
 
 /// 1PM coefficient χ₁ = (2γ² − 1)/p∞ (independent of ν).
@@ -15,12 +15,12 @@ use std::f64::consts::PI;
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::encounter::{kinematics::Boost, pm};
-/// let b = Boost::from_gamma(1.5).unwrap();
+/// use chiwave_core::encounter::{kinematics::RelativeSpeed, pm};
+/// let b = RelativeSpeed::from_gamma(1.5).unwrap();
 /// // (2·2.25 − 1)/√1.25 = 3.5/1.118034 = 3.130495
 /// assert!((pm::chi1(&b) - 3.5 / 1.25f64.sqrt()).abs() < 1e-15);
 /// ```
-pub fn chi1(b: &Boost) -> f64 {
+pub fn chi1(b: &RelativeSpeed) -> f64 {
     (2.0 * b.gamma * b.gamma - 1.0) / b.p_inf
 }
 
@@ -28,14 +28,14 @@ pub fn chi1(b: &Boost) -> f64 {
 ///
 /// Source: Westpfahl 1985, Fortsch. Phys. 33, 417; Bini & Damour 2017, arXiv:1706.06877;
 /// Damour 2018, arXiv:1710.10599 (encounter sheet §1.2, VERIFIED).
-pub fn chi2(b: &Boost, h: f64) -> f64 {
+pub fn chi2(b: &RelativeSpeed, h: f64) -> f64 {
     3.0 * PI / 8.0 * (5.0 * b.gamma * b.gamma - 1.0) / h
 }
 
 /// Test-body (Schwarzschild) 3PM coefficient χ₃^Schw = (64p⁶ + 72p⁴ + 12p² − 1)/(3p³), p = p∞.
 ///
 /// Source: encounter sheet §1.3 (VERIFIED against quadrature); Damour 2018, arXiv:1710.10599.
-pub fn chi3_schw(b: &Boost) -> f64 {
+pub fn chi3_schw(b: &RelativeSpeed) -> f64 {
     let p2 = b.p_inf * b.p_inf;
     (((64.0 * p2 + 72.0) * p2 + 12.0) * p2 - 1.0) / (3.0 * p2 * b.p_inf)
 }
@@ -47,7 +47,7 @@ pub fn chi3_schw(b: &Boost) -> f64 {
 /// form of Antonelli et al. 2019, arXiv:1901.07102 and Damour 2019, arXiv:1912.02139 (encounter
 /// sheet §1.3, VERIFIED). Limit γ → 1: C̄ → 4 + 18p² + (91/10)p⁴ (the 26 and −22 cancel to 4;
 /// the cancellation costs only a factor ≈ 6 in rounding, so no series is needed).
-pub fn cbar(b: &Boost) -> f64 {
+pub fn cbar(b: &RelativeSpeed) -> f64 {
     let g = b.gamma;
     let g2 = g * g;
     2.0 / 3.0 * g * (14.0 * g2 + 25.0) + 4.0 * ((4.0 * g2 - 12.0) * g2 - 3.0) / b.p_inf * (0.5 * b.gamma_m1).sqrt().asinh()
@@ -58,7 +58,7 @@ pub fn cbar(b: &Boost) -> f64 {
 /// Source: Bern et al. 2019 (arXiv:1901.04424, 1908.01493) in the mass-polynomial form of
 /// Damour 2019, arXiv:1912.02139 (encounter sheet §1.3, VERIFIED). h²χ₃ is linear in ν.
 /// High energy: χ₃^cons/γ³ → −8 ln(2γ) (diverges; pitfall 5), never use it alone there.
-pub fn chi3_conservative(b: &Boost, nu: f64, h: f64) -> f64 {
+pub fn chi3_conservative(b: &RelativeSpeed, nu: f64, h: f64) -> f64 {
     chi3_schw(b) - 2.0 * nu * b.p_inf / (h * h) * cbar(b)
 }
 
@@ -67,13 +67,13 @@ pub fn chi3_conservative(b: &Boost, nu: f64, h: f64) -> f64 {
 /// Source: Damour 2020, arXiv:2010.01641; Di Vecchia, Heissenberg, Russo, Veneziano 2020/21,
 /// arXiv:2008.12743 and 2101.05772 (encounter sheet §1.4, VERIFIED: cancels the high-energy log).
 /// I(v) is [`super::radiated::i_function`].
-pub fn chi3_radiation_reaction(b: &Boost, nu: f64, h: f64) -> f64 {
+pub fn chi3_radiation_reaction(b: &RelativeSpeed, nu: f64, h: f64) -> f64 {
     let s = 2.0 * b.gamma * b.gamma - 1.0;
-    nu * s * s * super::radiated::i_of_boost(b) / (h * h)
+    nu * s * s * super::radiated::i_of_speed(b) / (h * h)
 }
 
 /// The three j-expansion coefficients [χ₁, χ₂, χ₃^cons, χ₃^rad] at (γ, ν).
-pub fn coefficients(b: &Boost, nu: f64) -> [f64; 4] {
+pub fn coefficients(b: &RelativeSpeed, nu: f64) -> [f64; 4] {
     let h = (1.0 + 2.0 * nu * b.gamma_m1).sqrt();
     [chi1(b), chi2(b, h), chi3_conservative(b, nu, h), chi3_radiation_reaction(b, nu, h)]
 }

@@ -8,7 +8,7 @@
 //! [`SERIES_SWITCH_V`] they are evaluated from their small-velocity series, whose coefficients
 //! make the switch continuous to ≤ 1e-12 relative (tested).
 
-use super::kinematics::Boost;
+use super::kinematics::RelativeSpeed;
 use crate::numeric::poly;
 use std::f64::consts::PI;
 
@@ -83,8 +83,8 @@ pub fn e_function(gamma: f64) -> f64 {
     e_of(gamma, gm1, p)
 }
 
-/// E(γ) from a [`Boost`] (keeps the digits of γ − 1 for slow encounters).
-pub fn e_of_boost(b: &Boost) -> f64 {
+/// E(γ) from a [`RelativeSpeed`] (keeps the digits of γ − 1 for slow encounters).
+pub fn e_of_speed(b: &RelativeSpeed) -> f64 {
     e_of(b.gamma, b.gamma_m1, b.p_inf)
 }
 
@@ -135,8 +135,8 @@ pub fn i_function(v: f64) -> f64 {
     (2.0 / (v * v) - 16.0 / 3.0) + 2.0 * (3.0 * v * v - 1.0) * v.atanh() / (v * v * v)
 }
 
-/// I from a [`Boost`]: arctanh v = arccosh γ = ln(γ + p∞), so γ up to 1e6 keeps its digits.
-pub fn i_of_boost(b: &Boost) -> f64 {
+/// I from a [`RelativeSpeed`]: arctanh v = arccosh γ = ln(γ + p∞), so γ up to 1e6 keeps its digits.
+pub fn i_of_speed(b: &RelativeSpeed) -> f64 {
     let v = b.v;
     if v < SERIES_SWITCH_V {
         return i_series(v);
@@ -167,22 +167,22 @@ fn i_series(v: f64) -> f64 {
 ///
 /// Source: Herrmann, Parra-Martinez, Ruf, Zeng 2021, arXiv:2101.07255. Slow limit:
 /// E_rad → (37π/15) G³ m1² m2² v/b³.
-pub fn e_rad(b: &Boost, nu: f64, h: f64, b_over_gm: f64) -> f64 {
-    nu * nu * e_of_boost(b) / (h * b_over_gm.powi(3))
+pub fn e_rad(b: &RelativeSpeed, nu: f64, h: f64, b_over_gm: f64) -> f64 {
+    nu * nu * e_of_speed(b) / (h * b_over_gm.powi(3))
 }
 
 /// CM-frame recoil: the radiated 3-momentum along body 1's incoming direction, units of M c,
 /// P_rad = (G³ m1² m2²/b³) E(γ)/(γ + 1) · p (1/m1 − 1/m2) (encounter sheet §3.1; from
 /// arXiv:2101.07255, P_rad ∝ u1 + u2). The mechanical recoil of the pair is −P_rad.
-pub fn p_rad_cm(b: &Boost, m1: f64, m2: f64, p_cm: f64, b_over_gm: f64) -> f64 {
+pub fn p_rad_cm(b: &RelativeSpeed, m1: f64, m2: f64, p_cm: f64, b_over_gm: f64) -> f64 {
     let nu = m1 * m2;
-    nu * nu * e_of_boost(b) / ((b.gamma + 1.0) * b_over_gm.powi(3)) * p_cm * (1.0 / m1 - 1.0 / m2)
+    nu * nu * e_of_speed(b) / ((b.gamma + 1.0) * b_over_gm.powi(3)) * p_cm * (1.0 / m1 - 1.0 / m2)
 }
 
 /// Radiated angular momentum at O(G²), J_rad/J = 2(2γ² − 1) ν p∞ I(v)/(h² j²).
 ///
 /// Source: Damour 2020, arXiv:2010.01641 (encounter sheet §3.2, VERIFIED: slow limit
 /// J_rad → (16/5) G² m1² m2² v²/(M b)).
-pub fn j_rad_over_j(b: &Boost, nu: f64, h: f64, j: f64) -> f64 {
-    2.0 * (2.0 * b.gamma * b.gamma - 1.0) * nu * b.p_inf * i_of_boost(b) / (h * h * j * j)
+pub fn j_rad_over_j(b: &RelativeSpeed, nu: f64, h: f64, j: f64) -> f64 {
+    2.0 * (2.0 * b.gamma * b.gamma - 1.0) * nu * b.p_inf * i_of_speed(b) / (h * h * j * j)
 }

@@ -5,7 +5,7 @@
 //! (dy/dφ)² = F(y) = p∞² + 2εy − y² + 2εy³ = 2ε (y₀ − y)(y₁ − y)(y − y₂),
 //! χ = 2∫₀^{y₀} dy/√F − π. Capture when F has no positive root.
 
-use super::kinematics::Boost;
+use super::kinematics::RelativeSpeed;
 use crate::error::InputError;
 use crate::numeric::{cached_rule, Rule};
 use std::f64::consts::PI;
@@ -79,13 +79,13 @@ fn table() -> &'static Vec<Vec<f64>> {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::encounter::{kinematics::Boost, testbody};
-/// let b = Boost::from_gamma(2.0).unwrap();
+/// use chiwave_core::encounter::{kinematics::RelativeSpeed, testbody};
+/// let b = RelativeSpeed::from_gamma(2.0).unwrap();
 /// // χ₂^Schw = (3π/8)(5γ² − 1) = (3π/8)·19 (encounter sheet §1.2)
 /// let c2 = testbody::pm_coefficient(2, &b).unwrap();
 /// assert!((c2 - 3.0 * std::f64::consts::PI / 8.0 * 19.0).abs() < 1e-13);
 /// ```
-pub fn pm_coefficient(n: usize, b: &Boost) -> Option<f64> {
+pub fn pm_coefficient(n: usize, b: &RelativeSpeed) -> Option<f64> {
     if n == 0 || n > MAX_ORDER {
         return None;
     }
@@ -107,12 +107,12 @@ pub fn pm_coefficient(n: usize, b: &Boost) -> Option<f64> {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::encounter::{kinematics::Boost, testbody};
-/// let b = Boost::from_gamma(10.0).unwrap();
+/// use chiwave_core::encounter::{kinematics::RelativeSpeed, testbody};
+/// let b = RelativeSpeed::from_gamma(10.0).unwrap();
 /// // mpmath 1.3, dps 40, tests/reference/encounter_mpmath.py: jcrit(10) = 51.87475261674174
 /// assert!((testbody::critical_j(&b) - 51.87475261674174).abs() < 1e-11);
 /// ```
-pub fn critical_j(b: &Boost) -> f64 {
+pub fn critical_j(b: &RelativeSpeed) -> f64 {
     let g = b.gamma;
     let p2 = b.p_inf * b.p_inf;
     // r_c − 3 = [γ√(9p² + 1) − (3p² + 1)]/(2p²) = 2/(γ√(9p² + 1) + 3p² + 1) exactly
@@ -158,15 +158,15 @@ fn rules() -> [&'static Rule; 2] {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::encounter::{kinematics::Boost, testbody::{exact, TestBody}};
-/// let b = Boost::from_gamma(1.5).unwrap();
+/// use chiwave_core::encounter::{kinematics::RelativeSpeed, testbody::{exact, TestBody}};
+/// let b = RelativeSpeed::from_gamma(1.5).unwrap();
 /// // mpmath 1.3, dps 40, raw quadrature (tests/reference/encounter_mpmath.py): 1.153856678266915
 /// match exact(&b, 10.0).unwrap() {
 ///     TestBody::Scattered { chi, .. } => assert!((chi - 1.153856678266915).abs() < 1e-12),
 ///     TestBody::Captured => unreachable!(),
 /// }
 /// ```
-pub fn exact(b: &Boost, j: f64) -> Result<TestBody, InputError> {
+pub fn exact(b: &RelativeSpeed, j: f64) -> Result<TestBody, InputError> {
     let p2 = b.p_inf * b.p_inf;
     let eps = 1.0 / j;
     // Extrema of F: F' = 6εy² − 2y + 2ε = 0; no real extrema (j² ≤ 12) means F increases: capture.

@@ -18,7 +18,8 @@ use super::quadrupole::quadrupole_hyperbola;
 use super::spectrum::spectrum_angle_integrated;
 use super::em::{self, EmSystem};
 use crate::error::{finite, in_closed, InputError};
-use crate::units::{parse_charge, parse_length, parse_mass, parse_speed, AngleUnit, Charge, Length, Mass, Quantity};
+use crate::two_body::{ChargeUse, NuOrder, TwoBodyInput, TwoBodySystem};
+use crate::units::{parse_length, AngleUnit, Length, Quantity};
 use crate::validity::{Flag, Level};
 use serde::{Deserialize, Serialize};
 
@@ -395,56 +396,6 @@ const SOURCES: [&str; 5] = [
     "Antenna pattern: Thorne 1987, 300 Years of Gravitation, ch. 9 (common practice)",
 ];
 
-struct Masses {
-    m1: f64,
-    m2: f64,
-    /// G m_a/c² in metres, when physical.
-    l1_m: Option<f64>,
-    l2_m: Option<f64>,
-}
-
-fn read_masses(r: &WaveformRequest) -> Result<Masses, InputError> {
-    match (r.nu, &r.m1, &r.m2) {
-        (Some(nu), None, None) => {
-            finite("nu", nu)?;
-            if !(nu > 0.0 && nu <= 0.25) {
-                return Err(InputError::OutOfRange { field: "nu", value: nu, allowed: "0 < nu ≤ 0.25".into() });
-            }
-            let tm = match &r.total_mass {
-                Some(q) => parse_mass("total_mass", q)?,
-                None => Mass::Geometric(1.0),
-            };
-            let d = (1.0 - 4.0 * nu).max(0.0).sqrt();
-            let (f1, f2) = (0.5 * (1.0 + d), 0.5 * (1.0 - d));
-            let (m, l) = match tm {
-                Mass::Geometric(m) => (m, None),
-                Mass::Physical { gm } => (1.0, Some(gm / (crate::units::codata2018::C.powi(2)))),
-            };
-            Ok(Masses { m1: f1 * m, m2: f2 * m, l1_m: l.map(|x| f1 * x), l2_m: l.map(|x| f2 * x) })
-        }
-        (Some(_), _, _) => Err(InputError::Inconsistent {
-            field: "nu",
-            reason: "give either nu (with optional total_mass) or m1 and m2, not both".into(),
-        }),
-        (None, Some(a), Some(b)) => {
-            let a = parse_mass("m1", a)?;
-            let b = parse_mass("m2", b)?;
-            match (a, b) {
-                (Mass::Geometric(x), Mass::Geometric(y)) => Ok(Masses { m1: x, m2: y, l1_m: None, l2_m: None }),
-                (Mass::Physical { .. }, Mass::Physical { .. }) => {
-                    let (l1, l2) = (a.length_m().unwrap_or(f64::NAN), b.length_m().unwrap_or(f64::NAN));
-                    Ok(Masses { m1: l1 / (l1 + l2), m2: l2 / (l1 + l2), l1_m: Some(l1), l2_m: Some(l2) })
-                }
-                _ => Err(InputError::Inconsistent {
-                    field: "m2",
-                    reason: "m1 and m2 must both be physical (with a unit) or both geometric".into(),
-                }),
-            }
-        }
-        (None, _, _) => Err(InputError::Missing { field: "m1", hint: "give m1 and m2, or nu".into() }),
-    }
-}
-
 /// A validated gravitational request reduced to what the sky sums need
 /// ([`WaveformRequest::gravity_system`]).
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -459,23 +410,32 @@ pub struct GravitySystem {
 
 /// Inputs shared by the gravitational and the electromagnetic waveform, validated.
 struct Common {
-    ms: Masses,
-    /// m1 + m2 in the units of the input masses (1 when physical).
-    mtot: f64,
-    /// GM/c² in metres, when the masses are physical.
-    l_tot: Option<f64>,
-    gamma: f64,
-    b_over_m: f64,
-    /// Radians.
+    /// The two-body system (masses in units of M = m1 + m2, γ, b/(GM/c²), charges, SI scale).
+    two: TwoBodySystem,
+    /// Observer direction, radians.
     theta: f64,
     phi: f64,
-    /// Radians per unit of the input angles.
-    au: f64,
+    /// Radians per unit of the input angles (`angle_unit`).
+    rad_per_angle_unit: f64,
+    /// Retarded times, units of GM/c³.
     u: Vec<f64>,
 }
 
+impl Common {
+    fn gamma(&self) -> f64 {
+        self.two.kin.speed.gamma
+    }
+    fn b_over_gm(&self) -> f64 {
+        self.two.kin.b_over_gm
+    }
+    /// G M/c² in metres, when the masses are physical.
+    fn mass_length_m(&self) -> Option<f64> {
+        self.two.physical.map(|p| p.length_m)
+    }
+}
+
 /// Accepted range of b/(GM/c²), M = m1 + m2 (numerical sanity; the LO formulas are homogeneous in b).
-const B_MIN: f64 = 1e-6;
+const B_MIN: f64 = crate::two_body::ORBIT_MIN;
 const B_MAX: f64 = 1e12;
 
 /// Impact parameter below which the gravitational LO waveform is flagged invalid: 3√3 GM/c², the
@@ -485,34 +445,6 @@ const B_INVALID: f64 = 5.196_152_422_706_632;
 /// Below this b/(GM/c²) the flag is a caution (common practice, no source): the O(G²) waveform
 /// misses relative corrections of order GM/(c² b) or larger.
 const B_CAUTION: f64 = 50.0;
-
-fn read_charge(field: &'static str, q: Option<&Quantity>, l_tot: Option<f64>) -> Result<f64, InputError> {
-    let q = q.ok_or_else(|| InputError::Missing {
-        field,
-        hint: "force \"em\" needs q1 and q2 (e.g. 1e, -1e-9C, 3statC, or a bare number in units of √G M)".into(),
-    })?;
-    let x = match parse_charge(field, q)? {
-        Charge::Geometric(x) => x,
-        c @ Charge::Gaussian { .. } => match (c.length_m(), l_tot) {
-            (Some(l), Some(lt)) => l / lt,
-            _ => {
-                return Err(InputError::Inconsistent {
-                    field,
-                    reason: "a charge with a unit needs masses with units (e.g. 1.67e-27kg); bare charges are in units of √G M".into(),
-                })
-            }
-        },
-    };
-    finite(field, x)?;
-    if x.abs() > crate::encounter::CHARGE_MAX {
-        return Err(InputError::OutOfRange {
-            field,
-            value: x,
-            allowed: format!("|q|/(√G M) ≤ {:e}", crate::encounter::CHARGE_MAX),
-        });
-    }
-    Ok(x)
-}
 
 impl WaveformRequest {
     /// Evaluates the request: the gravitational waveform ([`GravityWaveformResult`]) or, with
@@ -525,14 +457,6 @@ impl WaveformRequest {
     pub fn evaluate(&self) -> Result<WaveformResult, InputError> {
         match self.force {
             WaveformForce::Gravity => {
-                for (f, q) in [("q1", &self.q1), ("q2", &self.q2)] {
-                    if q.is_some() {
-                        return Err(InputError::Inconsistent {
-                            field: f,
-                            reason: "charges are used only with force = \"em\"; remove q1 and q2 for gravity".into(),
-                        });
-                    }
-                }
                 let c = self.common()?;
                 Ok(WaveformResult::Gravity(Box::new(self.evaluate_gravity(&c)?)))
             }
@@ -557,56 +481,44 @@ impl WaveformRequest {
             });
         }
         let c = self.common()?;
-        let sys = Binary::new(c.ms.m1 / c.mtot, c.ms.m2 / c.mtot, c.gamma, c.b_over_m)?;
-        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mass_length_m: c.l_tot })
+        let sys = Binary::new(c.two.kin.m1, c.two.kin.m2, c.gamma(), c.b_over_gm())?;
+        Ok(GravitySystem { binary: sys, observer: (c.theta, c.phi), mass_length_m: c.mass_length_m() })
+    }
+
+    /// The two-body fields of the request (ν gives m1 ≥ m2: the heavier body comes in).
+    pub fn two_body(&self) -> TwoBodyInput<'_> {
+        TwoBodyInput {
+            m1: self.m1.as_ref(),
+            m2: self.m2.as_ref(),
+            nu: self.nu,
+            total_mass: self.total_mass.as_ref(),
+            gamma: self.gamma,
+            v: self.v.as_ref(),
+            b: Some(&self.b),
+            j: None,
+            q1: self.q1.as_ref(),
+            q2: self.q2.as_ref(),
+        }
     }
 
     fn common(&self) -> Result<Common, InputError> {
-        let ms = read_masses(self)?;
-        let mtot = ms.m1 + ms.m2;
-        let l_tot = match (ms.l1_m, ms.l2_m) {
-            (Some(a), Some(b)) => Some(a + b),
-            _ => None,
+        let charges = match self.force {
+            WaveformForce::Gravity => ChargeUse::Forbidden,
+            WaveformForce::Em => ChargeUse::Required,
         };
-        // Speed.
-        let gamma = match (self.gamma, &self.v) {
-            (Some(g), None) => {
-                finite("gamma", g)?;
-                g
-            }
-            (None, Some(q)) => {
-                let v = parse_speed("v", q)?;
-                1.0 / ((1.0 - v) * (1.0 + v)).sqrt()
-            }
-            (Some(_), Some(_)) => {
-                return Err(InputError::Inconsistent { field: "gamma", reason: "give either gamma or v, not both".into() })
-            }
-            (None, None) => return Err(InputError::Missing { field: "gamma", hint: "give gamma (> 1) or v".into() }),
-        };
-        if gamma.is_nan() || gamma <= 1.0 {
-            let field = if self.gamma.is_some() { "gamma" } else { "v" };
-            return Err(InputError::OutOfRange { field, value: gamma, allowed: "gamma > 1 (a speed v > 0)".into() });
+        let b_range = || format!("{B_MIN:e} ≤ b ≤ {B_MAX:e} in units of GM/c² (M = m1 + m2) for the waveform");
+        let two = self.two_body().validate(NuOrder::HeavierFirst, charges, None).map_err(|e| match e {
+            InputError::OutOfRange { field: "b", value, .. } => InputError::OutOfRange { field: "b", value, allowed: b_range() },
+            other => other,
+        })?;
+        let (gamma, b_over_m) = (two.kin.speed.gamma, two.kin.b_over_gm);
+        let l_tot = two.physical.map(|p| p.length_m);
+        if b_over_m > B_MAX {
+            return Err(InputError::OutOfRange { field: "b", value: b_over_m, allowed: b_range() });
         }
-        // b in units of GM/c² (M = m1 + m2), as for the encounter request: a bare number is b/M.
-        let b_len = parse_length("b", &self.b)?;
-        let b_over_m = match b_len {
-            Length::Geometric(x) => x,
-            Length::Physical { m } => match l_tot {
-                Some(l) => m / l,
-                None => b_len.in_units_of("b", None)?,
-            },
-        };
-        finite("b", b_over_m)?;
-        if !(B_MIN..=B_MAX).contains(&b_over_m) {
-            return Err(InputError::OutOfRange {
-                field: "b",
-                value: b_over_m,
-                allowed: format!("{B_MIN:e} ≤ b ≤ {B_MAX:e} in units of GM/c² (M = m1 + m2)"),
-            });
-        }
-        let au = self.angle_unit.unwrap_or(AngleUnit::Rad).radians();
-        let theta = finite("theta", self.theta)? * au;
-        let phi = finite("phi", self.phi)? * au;
+        let rad_per_angle_unit = self.angle_unit.unwrap_or(AngleUnit::Rad).radians();
+        let theta = finite("theta", self.theta)? * rad_per_angle_unit;
+        let phi = finite("phi", self.phi)? * rad_per_angle_unit;
         in_closed("theta", theta, 0.0, std::f64::consts::PI)?;
         if phi.abs() > 1e3 {
             return Err(InputError::OutOfRange { field: "phi", value: self.phi, allowed: "|phi| ≤ 1000 rad".into() });
@@ -644,15 +556,14 @@ impl WaveformRequest {
         let n = self.samples;
         let du = (u_max - u_min) / (n - 1) as f64;
         let u: Vec<f64> = (0..n).map(|i| if i + 1 == n { u_max } else { u_min + du * i as f64 }).collect();
-        Ok(Common { ms, mtot, l_tot, gamma, b_over_m, theta, phi, au, u })
+        Ok(Common { two, theta, phi, rad_per_angle_unit, u })
     }
 
     fn evaluate_gravity(&self, c: &Common) -> Result<GravityWaveformResult, InputError> {
-        let (ms, mtot, l_tot, gamma, b_over_m, theta, phi, au) =
-            (&c.ms, c.mtot, c.l_tot, c.gamma, c.b_over_m, c.theta, c.phi, c.au);
+        let (l_tot, gamma, b_over_m, theta, phi, au) = (c.mass_length_m(), c.gamma(), c.b_over_gm(), c.theta, c.phi, c.rad_per_angle_unit);
         let u = c.u.clone();
         let n = u.len();
-        let sys = Binary::new(ms.m1 / mtot, ms.m2 / mtot, gamma, b_over_m)?;
+        let sys = Binary::new(c.two.kin.m1, c.two.kin.m2, gamma, b_over_m)?;
         let distance_m = match &self.distance {
             None => None,
             Some(q) => match parse_length("distance", q)? {
@@ -726,9 +637,9 @@ impl WaveformRequest {
             ));
         }
         // Physical values.
-        let physical = match (ms.l1_m, ms.l2_m) {
-            (Some(l1), Some(l2)) => {
-                let l = l1 + l2;
+        let physical = match l_tot {
+            Some(l) => {
+                let (l1, l2) = (c.two.kin.m1 * l, c.two.kin.m2 * l);
                 let b_m = b_over_m * l;
                 let scales = PhysicalScales::new(l1, l2, v, b_m, distance_m);
                 let to_strain = |x: f64| distance_m.map(|d| x * l / d);
@@ -830,10 +741,9 @@ impl WaveformRequest {
                 });
             }
         }
-        let q1 = read_charge("q1", self.q1.as_ref(), c.l_tot)?;
-        let q2 = read_charge("q2", self.q2.as_ref(), c.l_tot)?;
-        let (m1, m2) = (c.ms.m1 / c.mtot, c.ms.m2 / c.mtot);
-        let sys = EmSystem::new(m1, m2, q1, q2, c.gamma, c.b_over_m)?;
+        let (q1, q2) = c.two.charges.ok_or(InputError::Missing { field: "q1", hint: "force \"em\" needs q1 and q2".into() })?;
+        let (m1, m2) = (c.two.kin.m1, c.two.kin.m2);
+        let sys = EmSystem::new(m1, m2, q1, q2, c.gamma(), c.b_over_gm())?;
         let f = em::field(&sys, c.theta, c.phi, &c.u);
         let mem = em::memory(&sys, c.theta, c.phi);
         let e1 = sys.body1_energy_closed();
@@ -883,7 +793,7 @@ impl WaveformRequest {
                 ));
             }
         }
-        let physical = c.l_tot.map(|l| {
+        let physical = c.mass_length_m().map(|l| {
             let cc = crate::units::codata2018::C;
             let mc2 = mc2_joules(l);
             EmPhysicalResult {
@@ -909,11 +819,11 @@ impl WaveformRequest {
             e_rad_flux_rel_error: energies.as_ref().map(|e| e.rel_error_estimate),
             p_rad_flux: energies.as_ref().map(|e| e.momentum),
             frame: Frame::Rest2,
-            gamma: c.gamma,
+            gamma: c.gamma(),
             v: sys.v(),
             m1_over_m: m1,
             m2_over_m: m2,
-            b_over_m: c.b_over_m,
+            b_over_m: c.b_over_gm(),
             q1,
             q2,
             impulse: sys.impulse(),
