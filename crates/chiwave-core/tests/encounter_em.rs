@@ -2,7 +2,7 @@
 // Reference values are quoted with every digit the reference script printed.
 #![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
-use chiwave_core::encounter::em::{self, Darwin};
+use chiwave_core::encounter::pl::{self, Darwin};
 use chiwave_core::encounter::kinematics::RelativeSpeed;
 use chiwave_core::encounter::{EmResult, EncounterRequest, EncounterResult};
 use chiwave_core::numeric::{rel_diff, REL_QUADRATURE, REL_ROUNDING};
@@ -18,7 +18,7 @@ fn em_result(json: &str) -> EmResult {
 }
 
 fn darwin(g: f64, k: f64) -> Option<f64> {
-    match em::darwin(&RelativeSpeed::from_gamma(g).unwrap(), k) {
+    match pl::darwin(&RelativeSpeed::from_gamma(g).unwrap(), k) {
         Darwin::Scattered { chi } => Some(chi),
         Darwin::FallToCentre => None,
     }
@@ -61,7 +61,7 @@ fn darwin_expansion_matches_pl_coefficients() {
     for g in [1.1, 1.5, 3.0] {
         let b = RelativeSpeed::from_gamma(g).unwrap();
         for sign in [1.0, -1.0] {
-            let rem = |k: f64| darwin(g, k).unwrap() - 2.0 * (em::e1(&b) * k + em::e2(1.0) * k * k + em::e3_test(&b) * k.powi(3));
+            let rem = |k: f64| darwin(g, k).unwrap() - 2.0 * (pl::e1(&b) * k + pl::e2(1.0) * k * k + pl::e3_test(&b) * k.powi(3));
             let (r1, r2) = (rem(sign * 0.02), rem(sign * 0.01));
             let ratio = r1 / r2;
             assert!((ratio - 16.0).abs() < 3.0, "γ={g} sign={sign}: {ratio}");
@@ -78,7 +78,7 @@ fn rutherford_limit() {
         let b = RelativeSpeed::from_v(v).unwrap();
         let k = 0.5 * v; // tan(θ/2) ≈ 0.5
         for sign in [1.0, -1.0] {
-            let chi = match em::darwin(&b, sign * k) {
+            let chi = match pl::darwin(&b, sign * k) {
                 Darwin::Scattered { chi } => chi,
                 Darwin::FallToCentre => panic!(),
             };

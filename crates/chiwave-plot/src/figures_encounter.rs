@@ -9,13 +9,13 @@
 use crate::{palette, Axis, Band, Dash, ErrorBar, Figure, LegendAt, Markers, Series, Style};
 use chiwave_core::encounter::eob::EobOrbit;
 use chiwave_core::encounter::nr::NrComparison;
-use chiwave_core::encounter::{Sweep, SweepVar};
+use chiwave_core::encounter::{ChiSweep, SweepVar};
 use chiwave_core::units::AngleUnit;
 
 /// χ against b/(GM) or j, log–log: the PM partial sums, Newtonian, the exact test-body angle,
 /// the strong-field estimate; shaded where the test body is captured (x ≤ x_c) and where the
 /// estimate predicts capture; the request's own (x, χ) marked.
-pub fn chi_sweep(s: &Sweep, current: Option<(f64, f64)>, angle: AngleUnit) -> Figure {
+pub fn chi_sweep(s: &ChiSweep, current: Option<(f64, f64)>, angle: AngleUnit) -> Figure {
     let conv = |a: Option<f64>| a.filter(|v| v.is_finite()).map(|r| angle.from_rad(r));
     let (xlabel, xc, cap_label) = match s.var {
         SweepVar::B => ("impact parameter b [GM/c²]", s.b_critical_test_body, "test body captured (b ≤ b_c)"),
