@@ -302,7 +302,7 @@ fn worked_example_physical_units() {
     assert!(rel_diff(p.e_rad_msun_c2, r.e_rad_closed * 20.0) < 1e-12);
     // Newtonian straight line (sheet §4): E = 37π G³ m1² m2² v/(15 b³ c⁵) — v = 1000 km/s.
     let v = 1e6 / 299_792_458.0;
-    let b_over_m = r.b_over_m;
+    let b_over_m = r.b_over_gm;
     let newton = 37.0 * std::f64::consts::PI * 0.0625 * v / (15.0 * b_over_m.powi(3));
     assert!(rel_diff(r.e_rad_closed, newton) < 2.0 * v * v, "{} vs {newton}", r.e_rad_closed);
 }
@@ -337,7 +337,7 @@ fn window_units() {
     let base = r#""m1":"10Msun","m2":"5Msun","v":"2000km/s","b":"0.5au","theta":1.0,"phi":0.5,"samples":3,"energy_flux":false"#;
     let r = request(&format!(r#"{{{base},"u_min":-10,"u_max":10,"u_unit":"b_over_v"}}"#)).unwrap();
     // b/v in GM/c³ is (b/(GM/c²))/(v/c) (definition).
-    let b_over_v = r.b_over_m / r.v;
+    let b_over_v = r.b_over_gm / r.v;
     assert!(rel_diff(r.u[0], -10.0 * b_over_v) < 1e-12, "{} vs {}", r.u[0], -10.0 * b_over_v);
     assert!(r.u[1].abs() < 1e-9 * b_over_v);
     let p = r.physical.as_ref().unwrap();
@@ -431,7 +431,7 @@ fn small_b_contract_example_works_and_is_flagged() {
     let j = r#"{"m1":1,"m2":1,"gamma":2,"b":1,"theta":1.1,"phi":0.4,"frame":"rest2","u_min":-5,"u_max":5,"samples":101}"#;
     let r = request(j).unwrap();
     assert_eq!(r.u.len(), 101);
-    assert!((r.b_over_m - 1.0).abs() < 1e-15);
+    assert!((r.b_over_gm - 1.0).abs() < 1e-15);
     assert!(r.h_plus.iter().chain(&r.h_cross).all(|x| x.is_finite()));
     let f = r.flags.iter().find(|f| f.key == "b_weak_field").expect("b flag");
     assert_eq!(f.level, chiwave_core::validity::Level::Invalid);
@@ -465,14 +465,14 @@ const EM_BASE: &str = r#""force":"em","m1":1,"m2":1,"gamma":2,"theta":1.1,"phi":
 fn em_request_contract() {
     let r = em_request(&format!(r#"{{{EM_BASE},"q1":0.1,"q2":-0.2,"b":20,"spectrum":{{"omega_min":0.01,"omega_max":1,"points":3}}}}"#)).unwrap();
     let j = serde_json::to_value(&r).unwrap();
-    for k in ["u", "e_theta", "e_phi", "memory", "e_rad_flux", "e_rad_closed", "e_rad_body1", "e_rad_body2", "interference", "flags", "sources", "units", "spectrum", "gamma", "b_over_m"] {
+    for k in ["u", "e_theta", "e_phi", "memory", "e_rad_flux", "e_rad_closed", "e_rad_body1", "e_rad_body2", "interference", "flags", "sources", "units", "spectrum", "gamma", "b_over_gm", "b_over_m"] {
         assert!(j.get(k).is_some(), "missing key {k}");
     }
     assert_eq!(j["force"], "em");
     assert!(j["memory"]["theta"].is_f64() && j["memory"]["phi"].is_f64());
     assert!(j["e_theta"].as_array().unwrap().len() == 11 && j["e_phi"].as_array().unwrap().len() == 11);
     assert!(j["units"].as_str().unwrap().starts_with("Gaussian, c = 1"));
-    assert!(r.sources.iter().any(|s| s.starts_with("e_rad_flux:")) && r.sources.iter().any(|s| s.contains("e_rad_closed")));
+    assert!(r.sources["e_rad_flux"].starts_with("e_rad_flux:") && r.sources["e_rad_closed"].contains("e_rad_closed"));
     // Bookkeeping: e_rad_flux = body1 + body2 + interference; e_rad_closed = body1 + body2.
     let (flux, x) = (r.e_rad_flux.unwrap(), r.interference.unwrap());
     assert!(rel_diff(flux, r.e_rad_body1 + r.e_rad_body2 + x) < 1e-14);
@@ -524,7 +524,7 @@ fn em_request_agrees_with_encounter_module() {
         let w = em_request(&format!(r#"{{"force":"em",{common},"theta":0.7,"phi":2.0,"u_min":-10,"u_max":10,"samples":2}}"#)).unwrap();
         let e: EncounterRequest = serde_json::from_str(&format!(r#"{{"force":"em",{common}}}"#)).unwrap();
         let EncounterResult::Em(e) = e.evaluate().unwrap() else { panic!("em encounter") };
-        assert!(rel_diff(w.b_over_m, e.b_over_gm) < 1e-14);
+        assert!(rel_diff(w.b_over_gm, e.b_over_gm) < 1e-14);
         assert!(rel_diff(w.e_rad_body1, e.e_rad) < 1e-13, "{} vs {}", w.e_rad_body1, e.e_rad);
         assert_eq!(w.physical.is_some(), physical);
         if let (Some(wp), Some(ep)) = (&w.physical, &e.physical) {

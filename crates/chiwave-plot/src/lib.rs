@@ -13,7 +13,7 @@
 
 pub mod figures;
 pub mod figures_encounter;
-pub mod figures_radiation;
+pub mod figures_waveform;
 pub mod heatmap;
 pub mod scene;
 pub mod ticks;

@@ -1,8 +1,9 @@
 //! Figure dispatch, shared by the page and the CLI: request + figure name → the core's plot data
 //! → one builder of [`crate::figures`]. No physics here: every number comes from a core function.
 
-use crate::{figures, figures_encounter, figures_radiation, Figure};
+use crate::{figures, figures_encounter, figures_waveform, Figure};
 use chiwave_core::encounter::EncounterRequest;
+use chiwave_core::waveform::grids::{self, SKY_N_PHI, SKY_N_THETA};
 use chiwave_core::waveform::{spectrum_si, sky_map, Binary, Frame, SkyQuantity, SpectrumOptions, WaveformRequest, WaveformResult, GravityWaveformResult};
 use chiwave_core::deflection::{self, LightRequest};
 use chiwave_core::error::InputError;
@@ -34,10 +35,10 @@ impl Options {
     ///
     /// # Errors
     /// [`InputError`] naming `projection`.
-    pub fn projection(&self) -> Result<figures_radiation::Projection, InputError> {
+    pub fn projection(&self) -> Result<figures_waveform::Projection, InputError> {
         match &self.projection {
-            None => Ok(figures_radiation::Projection::default()),
-            Some(s) => figures_radiation::Projection::parse("projection", s),
+            None => Ok(figures_waveform::Projection::default()),
+            Some(s) => figures_waveform::Projection::parse("projection", s),
         }
     }
 }
@@ -216,12 +217,6 @@ pub fn figure(req: &Request, name: &str, opts: &Options) -> Result<Figure, Input
     Ok(sized(fig, opts))
 }
 
-/// Sky-map grid of the "sky" figures (cell centres): 24 × 48 cells of 7.5°.
-pub const SKY_N_THETA: usize = 24;
-pub const SKY_N_PHI: usize = 48;
-/// Spectrum points (log-spaced).
-const SPECTRUM_POINTS: usize = 96;
-
 /// The waveform request evaluated without the sky integral (the figures never need it; the
 /// page runs that integral progressively), plus the validated system and observer direction.
 ///
@@ -275,29 +270,6 @@ fn waveform_axes(res: &GravityWaveformResult) -> Axes {
     }
 }
 
-/// The spectrum's ω range: from 1/100 of v/b (the flat zero-frequency end) to 20 γ² v/b, past
-/// the Doppler-raised exponential fall-off (rule of thumb ω ~ v/b, waveform sheet §6; a plot
-/// range, not a result).
-pub fn spectrum_range(sys: &Binary) -> (f64, f64) {
-    omega_range(sys.v(), sys.b, sys.gamma)
-}
-
-/// [`spectrum_range`] from the relative speed v, b/(GM/c²) and γ.
-fn omega_range(v: f64, b: f64, gamma: f64) -> (f64, f64) {
-    let w = v / b;
-    (1e-2 * w, 20.0 * gamma * gamma * w)
-}
-
-/// The spectrum figure's ω grid for a system (`SPECTRUM_POINTS` log-spaced values over
-/// [`spectrum_range`]).
-///
-/// # Errors
-/// Never for a valid system (the range is positive and ordered).
-pub fn spectrum_omegas(sys: &Binary) -> Result<Vec<f64>, InputError> {
-    let (omega_min, omega_max) = spectrum_range(sys);
-    SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: false }.omegas()
-}
-
 fn scale(v: &[f64], k: f64) -> Vec<f64> {
     v.iter().map(|x| x * k).collect()
 }
@@ -310,7 +282,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
             let hp = scale(&res.h_plus, a.h_scale);
             let hc = scale(&res.h_cross, a.h_scale);
             let det = res.detector.as_ref().map(|d| scale(&d.h, a.h_scale));
-            Ok(figures_radiation::strain(&figures_radiation::StrainData {
+            Ok(figures_waveform::strain(&figures_waveform::StrainData {
                 t: &a.t,
                 t_label: a.t_label,
                 h_plus: &hp,
@@ -326,12 +298,12 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
             let projection = opts.projection()?;
             let (res, sys, obs) = waveform_system(r)?;
             let (kind, q) = if name == "sky" {
-                (figures_radiation::SkyKind::Energy, SkyQuantity::EnergyPerSolidAngle)
+                (figures_waveform::SkyKind::Energy, SkyQuantity::EnergyPerSolidAngle)
             } else {
-                (figures_radiation::SkyKind::Memory, SkyQuantity::Memory)
+                (figures_waveform::SkyKind::Memory, SkyQuantity::Memory)
             };
             let map = sky_map(&sys, res.frame, q, SKY_N_THETA, SKY_N_PHI)?;
-            Ok(figures_radiation::sky(&figures_radiation::SkyData {
+            Ok(figures_waveform::sky(&figures_waveform::SkyData {
                 theta: &map.theta,
                 phi: &map.phi,
                 values: &map.values,
@@ -345,18 +317,17 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
         "spectrum" => {
             let mut q = r.clone();
             let sys = r.gravity_system()?.binary;
-            let (omega_min, omega_max) = spectrum_range(&sys);
-            q.spectrum = Some(SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true });
+            q.spectrum = Some(grids::figure_spectrum(sys.v(), sys.b, sys.gamma, true));
             q.samples = 2;
             let (res, _, _) = waveform_system(&q)?;
             let s = res.spectrum.ok_or(InputError::Inconsistent { field: "spectrum", reason: "no spectrum in the result".into() })?;
-            Ok(figures_radiation::spectrum(&figures_radiation::SpectrumData {
+            Ok(figures_waveform::spectrum(&figures_waveform::SpectrumData {
                 omega: &s.omega,
                 de_domega_dsolid: &s.de_domega_dsolid,
                 de_domega: s.de_domega.as_deref(),
                 zfl_direction: s.zfl_direction,
                 zfl_closed: s.zfl_closed,
-                si: res.physical.as_ref().map(|p| spectrum_si(p.scales.mass_length_m)),
+                physical: res.physical.as_ref().map(|p| spectrum_si(p.scales.mass_length_m)),
             }))
         }
         "slow_motion" => {
@@ -367,7 +338,7 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
             let quad = res.quadrupole.as_ref().ok_or(InputError::Inconsistent { field: "quadrupole", reason: "no quadrupole waveform in the result".into() })?;
             let (hp, hc) = (scale(&res.h_plus, a.h_scale), scale(&res.h_cross, a.h_scale));
             let (qp, qc) = (scale(&quad.h_plus, a.h_scale), scale(&quad.h_cross, a.h_scale));
-            Ok(figures_radiation::slow_motion(&a.t, a.t_label, (&hp, &hc), (&qp, &qc), a.h_label))
+            Ok(figures_waveform::slow_motion(&a.t, a.t_label, (&hp, &hc), (&qp, &qc), a.h_label))
         }
         "em_field" => {
             let res = em_result(r, name, None)?;
@@ -375,23 +346,22 @@ fn waveform_figure(r: &WaveformRequest, name: &str, opts: &Options) -> Result<Fi
                 Some(p) => (p.u_s.clone(), "retarded time u [s]"),
                 None => (res.u.clone(), "retarded time u [GM/c³]"),
             };
-            Ok(figures_radiation::em_field(&t, t_label, &res.e_theta, &res.e_phi, (res.memory.theta, res.memory.phi)))
+            Ok(figures_waveform::em_field(&t, t_label, &res.e_theta, &res.e_phi, (res.memory.theta, res.memory.phi)))
         }
         "em_spectrum" => {
             let mut q = r.clone();
             q.samples = 2;
             let res0 = em_result(&q, name, None)?;
-            let (omega_min, omega_max) = omega_range(res0.v, res0.b_over_m, res0.gamma);
-            let opts = SpectrumOptions { omega_min, omega_max, points: SPECTRUM_POINTS, angle_integrated: true };
+            let opts = grids::figure_spectrum(res0.v, res0.b_over_gm, res0.gamma, true);
             let res = em_result(r, name, Some(opts))?;
             let s = res.spectrum.ok_or(InputError::Inconsistent { field: "spectrum", reason: "no spectrum in the result".into() })?;
-            let mut fig = figures_radiation::spectrum(&figures_radiation::SpectrumData {
+            let mut fig = figures_waveform::spectrum(&figures_waveform::SpectrumData {
                 omega: &s.omega,
                 de_domega_dsolid: &s.de_domega_dsolid,
                 de_domega: s.de_domega.as_deref(),
                 zfl_direction: s.zfl_direction,
                 zfl_closed: 0.0,
-                si: None,
+                physical: None,
             });
             fig.title = "Electromagnetic spectrum (closed-form Bessel K0/K1), rest frame of body 2".into();
             Ok(fig)

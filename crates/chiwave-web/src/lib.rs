@@ -14,9 +14,9 @@ use chiwave_plot::scene;
 use wasm_bindgen::prelude::*;
 
 mod encounter;
-mod radiation;
+mod waveform;
 pub use encounter::encounter_nr;
-pub use radiation::RadiationJob;
+pub use waveform::WaveformJob;
 
 
 /// A JS `Error` with `field` and `kind` properties.

@@ -95,3 +95,20 @@ pub fn cumulative_angles(c: &[f64; 4], j: f64) -> [f64; 4] {
 pub fn chi_newtonian(b_over_gm: f64, v: f64) -> f64 {
     2.0 * (1.0 / (b_over_gm * v * v)).atan()
 }
+
+/// The 1PM scattering angle at impact parameter b, χ = 2χ₁/j = 2(2γ² − 1) h/(b (γ² − 1))
+/// (b in units of GM/c², h = E/M; with j = p∞ b/h).
+///
+/// Source: Portilla 1980; Westpfahl 1985; Damour 2016, arXiv:1609.00354 (as [`chi1`]). Used as
+/// the size of the leading-order deflection by the waveform's `weak_deflection` flag.
+///
+/// # Examples
+/// ```
+/// use chiwave_core::encounter::{kinematics::RelativeSpeed, pm};
+/// let s = RelativeSpeed::from_gamma(1.5).unwrap();
+/// let (h, b) = (1.0, 100.0); // test body: h = 1, so j = p∞ b
+/// assert!((pm::chi_1pm_at_b(1.5, h, b) - 2.0 * pm::chi1(&s) / (s.p_inf * b)).abs() < 1e-16);
+/// ```
+pub fn chi_1pm_at_b(gamma: f64, h: f64, b_over_gm: f64) -> f64 {
+    2.0 * (2.0 * gamma * gamma - 1.0) * h / (b_over_gm * (gamma * gamma - 1.0))
+}

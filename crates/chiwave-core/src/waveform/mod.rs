@@ -9,19 +9,29 @@
 //! Gauss–Legendre quadrature.
 //!
 //! # Sources
-//! * Waveform construction: derived in the project's waveform reference sheet (§1) from the
-//!   Landau–Lifshitz relaxed Einstein equations in harmonic gauge (Landau & Lifshitz, *Classical
-//!   Theory of Fields*, §96; Poisson & Will, *Gravity* (2014), ch. 6). It is equivalent to
-//!   Kovacs & Thorne 1978 (ApJ 224, 62), Jakobsen, Mogull, Plefka & Steinhoff 2021
-//!   (arXiv:2101.12688) and Mougiakakos, Riva & Vernizzi 2021 (arXiv:2102.08339) by the numerical
-//!   checks of the sheet's §7 (not compared term by term).
+//! * Waveform construction: our derivation (`kernel.rs`, [`waveform()`]) from the relaxed
+//!   Einstein equations in harmonic gauge with the Landau–Lifshitz pseudotensor (Landau &
+//!   Lifshitz, *Classical Theory of Fields*, §96; Poisson & Will, *Gravity* (2014), ch. 6). It is
+//!   equivalent to Kovacs & Thorne 1978 (ApJ 224, 62), Jakobsen, Mogull, Plefka & Steinhoff 2021
+//!   (arXiv:2101.12688) and Mougiakakos, Riva & Vernizzi 2021 (arXiv:2102.08339) by numerical
+//!   checks (energy balance, Lorentz covariance, memory, quadrupole limit; `tests/waveform.rs`),
+//!   not compared term by term.
 //! * Radiated energy-momentum: Herrmann, Parra-Martinez, Ruf & Zeng 2021, arXiv:2101.07255
-//!   (recalled formula, sheet §4), reproduced by the flux integral of this waveform.
-//! * Memory: Braginsky & Thorne 1987, Nature 327, 123 (sheet §3).
+//!   (recalled formula), reproduced by the flux integral of this waveform.
+//! * Memory: Braginsky & Thorne 1987, Nature 327, 123.
 //! * Zero-frequency limit: Smarr 1977, PRD 15, 2069; closed form of Di Vecchia, Heissenberg, Russo
-//!   & Veneziano 2021, arXiv:2101.05772 (recalled, prefactor fixed by the sheet's check, §3).
+//!   & Veneziano 2021, arXiv:2101.05772 (recalled; the prefactor 2GQ²/π fixed by the numerical
+//!   zero-frequency limit of this waveform).
 //!
-//! # Conventions (sheet §0)
+//! # Files
+//! The request (`request.rs`, validated in `validate.rs` through [`crate::two_body`]), the
+//! results (`results.rs`), regime checks (`flags.rs`), sources (`sources.rs`), the two
+//! evaluations (`gravity.rs`, `electromagnetic.rs`), the grids the core chooses ([`grids`]), the
+//! physics (`kernel.rs` strain, `memory.rs`, `spectrum.rs`, `energy.rs` sky integrals,
+//! `quadrupole.rs`, `observer.rs` SI scales and antenna pattern, `frames.rs`), the progressive
+//! sky work ([`WaveformJob`]) and the electromagnetic family ([`em`]).
+//!
+//! # Conventions
 //! * G = c = 1; every geometric quantity is in units of the total mass M = m1 + m2 unless a
 //!   function says otherwise (masses are passed as numbers in any common unit; the functions are
 //!   homogeneous, so passing m1 + m2 = 1 makes the output "in units of M").
@@ -43,29 +53,37 @@
 //! `force: "em"` returns an [`EmWaveformResult`].
 
 pub mod em;
+mod electromagnetic;
 mod energy;
+mod flags;
 mod frames;
+mod gravity;
+pub mod grids;
 mod kernel;
 mod memory;
 mod observer;
-mod progressive;
+mod job;
 mod quadrupole;
 mod request;
+mod results;
+mod sources;
 mod spectrum;
+mod validate;
 
 pub use energy::{
     radiated_closed_form, sky_map, sky_map_row, RadiatedClosed, SkyIntegrator, SkyMap, SkyOptions, SkyProgress,
     SkyQuantity,
 };
 pub use frames::{Binary, Frame};
+pub use grids::SPECTRUM_SKY;
 pub use kernel::{constant_piece, waveform, DirectionWaveform, Strain, DEFAULT_X_NODES};
 pub use memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 pub use observer::{antenna_pattern, characteristic_frequency, spectrum_si, strain_unit, PhysicalScales, SpectrumSi};
-pub use progressive::{RadiationJob, RadiationPhase, RadiationSnapshot, SpectrumCurves};
+pub use job::{WaveformJob, WaveformPhase, WaveformSnapshot, SpectrumCurves};
 pub use quadrupole::quadrupole_hyperbola;
-pub use request::{
-    DetectorOptions, DetectorResult, GravitySystem, EmPhysicalResult, EmSpectrumResult, EmWaveformResult, GravityWaveformResult,
-    MemoryPair, PhysicalResult, QuadrupoleResult, SpectrumOptions, SpectrumResult, ThetaPhi, WaveformForce,
-    TimeUnit, WaveformRequest, WaveformResult, SPECTRUM_SKY,
+pub use request::{DetectorOptions, GravitySystem, SpectrumOptions, TimeUnit, WaveformForce, WaveformRequest};
+pub use results::{
+    DetectorResult, EmSpectrumResult, EmWaveformPhysical, EmWaveformResult, GravityWaveformPhysical, GravityWaveformResult,
+    MemoryPair, QuadrupoleResult, SpectrumResult, ThetaPhi, WaveformResult,
 };
 pub use spectrum::{spectrum_angle_integrated, zfl_from_memory, SkySpectrum};

@@ -11,16 +11,18 @@ use super::frames::{Binary, Frame};
 use super::kernel::{DirectionWaveform, DEFAULT_X_NODES};
 use super::observer::{spectrum_si, SpectrumSi};
 use super::memory::zfl_angle_integrated_closed_form;
-use super::request::{mc2_joules, WaveformRequest, SPECTRUM_SKY};
+use super::gravity::mc2_joules;
+use super::grids::SPECTRUM_SKY;
+use super::request::WaveformRequest;
 use super::spectrum::SkySpectrum;
 use super::SkyMap;
 use crate::error::InputError;
 use serde::Serialize;
 
-/// Which sum a [`RadiationJob`] is working on.
+/// Which sum a [`WaveformJob`] is working on.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
 #[serde(rename_all = "snake_case")]
-pub enum RadiationPhase {
+pub enum WaveformPhase {
     /// The energy-momentum flux integral (the balance against the closed form).
     Balance,
     /// The sky map, one θ row at a time.
@@ -31,10 +33,10 @@ pub enum RadiationPhase {
     Done,
 }
 
-/// Where a [`RadiationJob`] stands, with the partial energy balance (G = c = 1, units of M).
+/// Where a [`WaveformJob`] stands, with the partial energy balance (G = c = 1, units of M).
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct RadiationSnapshot {
-    pub phase: RadiationPhase,
+pub struct WaveformSnapshot {
+    pub phase: WaveformPhase,
     /// Fraction of all the work done, in [0, 1] (weighted by the number of directions).
     pub fraction: f64,
     /// Fractions of each phase, in [0, 1].
@@ -45,7 +47,7 @@ pub struct RadiationSnapshot {
     /// E_rad/(M c²) from the flux integral over the directions done so far (the full integral once
     /// `balance_fraction` = 1).
     pub e_rad_flux: f64,
-    /// E_rad/(M c²), closed form of Herrmann et al. 2021 (waveform sheet §4).
+    /// E_rad/(M c²), closed form of Herrmann et al. 2021 (arXiv:2101.07255).
     pub e_rad_closed: f64,
     /// |e_rad_flux − e_rad_closed|/e_rad_closed, once the flux integral is complete.
     pub e_rad_rel_diff: Option<f64>,
@@ -70,24 +72,24 @@ pub struct RadiationSnapshot {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::waveform::{RadiationJob, SkyQuantity, WaveformRequest};
+/// use chiwave_core::waveform::{WaveformJob, SkyQuantity, WaveformRequest};
 /// let req: WaveformRequest = serde_json::from_str(
 ///     r#"{"m1": 1, "m2": 1, "gamma": 1.2, "b": 30, "theta": 1.0, "phi": 0.3, "u_min": -50, "u_max": 50}"#,
 /// ).unwrap();
-/// let mut job = RadiationJob::new(&req, SkyQuantity::Memory, 4, 8, &[0.001, 0.01]).unwrap();
+/// let mut job = WaveformJob::new(&req, SkyQuantity::Memory, 4, 8, &[0.001, 0.01]).unwrap();
 /// let first = job.step(10).unwrap();
 /// assert!(!first.done && first.fraction > 0.0);
 /// let last = job.run().unwrap();
 /// assert!(last.done && last.e_rad_rel_diff.unwrap() < 1e-8);
 /// ```
 #[derive(Debug, Clone)]
-pub struct RadiationJob {
+pub struct WaveformJob {
     sys: Binary,
     frame: Frame,
     observer: (f64, f64),
     mc2_j: Option<f64>,
     /// SI factors of the spectrum, when the masses are physical.
-    si: Option<SpectrumSi>,
+    physical: Option<SpectrumSi>,
     closed: RadiatedClosed,
     balance: SkyIntegrator,
     quantity: SkyQuantity,
@@ -100,7 +102,7 @@ pub struct RadiationJob {
     zfl_direction: f64,
 }
 
-impl RadiationJob {
+impl WaveformJob {
     /// Sets up the three sums for `req` (its `energy_flux`, `spectrum` and `quadrupole` fields are
     /// not used): the balance on the sky rule [`SkyOptions::for_gamma`], a sky map of `quantity`
     /// on `n_theta` × `n_phi` cells, and dE/dω at `omega` on [`SPECTRUM_SKY`].
@@ -116,17 +118,17 @@ impl RadiationJob {
     ) -> Result<Self, InputError> {
         let g = req.gravity_system()?;
         let (sys, observer, mc2_j) = (g.binary, g.observer, g.mass_length_m.map(mc2_joules));
-        let si = g.mass_length_m.map(spectrum_si);
+        let physical = g.mass_length_m.map(spectrum_si);
         check_sky_grid(n_theta, n_phi)?;
         let frame = req.frame;
         let w = DirectionWaveform::new(&sys, frame, observer.0, observer.1, DEFAULT_X_NODES)?;
         let spectrum = SkySpectrum::new(&sys, frame, omega, SPECTRUM_SKY)?;
-        Ok(RadiationJob {
+        Ok(WaveformJob {
             sys,
             frame,
             observer,
             mc2_j,
-            si,
+            physical,
             closed: radiated_closed_form(&sys, frame),
             balance: SkyIntegrator::new(&sys, frame, SkyOptions::for_gamma(sys.gamma))?,
             quantity,
@@ -140,15 +142,15 @@ impl RadiationJob {
     }
 
     /// The current phase.
-    pub fn phase(&self) -> RadiationPhase {
+    pub fn phase(&self) -> WaveformPhase {
         if !self.balance.progress().done {
-            RadiationPhase::Balance
+            WaveformPhase::Balance
         } else if self.map_cells.len() < self.n_theta * self.n_phi {
-            RadiationPhase::SkyMap
+            WaveformPhase::SkyMap
         } else if !self.spectrum.done() {
-            RadiationPhase::Spectrum
+            WaveformPhase::Spectrum
         } else {
-            RadiationPhase::Done
+            WaveformPhase::Done
         }
     }
 
@@ -156,13 +158,13 @@ impl RadiationJob {
     ///
     /// # Errors
     /// [`InputError`] from a direction (not expected: every direction comes from a unit vector).
-    pub fn step(&mut self, work: usize) -> Result<RadiationSnapshot, InputError> {
+    pub fn step(&mut self, work: usize) -> Result<WaveformSnapshot, InputError> {
         let work = work.max(1);
         match self.phase() {
-            RadiationPhase::Balance => {
+            WaveformPhase::Balance => {
                 self.balance.step(work);
             }
-            RadiationPhase::SkyMap => {
+            WaveformPhase::SkyMap => {
                 let total = self.n_theta * self.n_phi;
                 let end = self.map_cells.len().saturating_add(work).min(total);
                 for k in self.map_cells.len()..end {
@@ -171,10 +173,10 @@ impl RadiationJob {
                     self.map_cells.push(v);
                 }
             }
-            RadiationPhase::Spectrum => {
+            WaveformPhase::Spectrum => {
                 self.spectrum.step(work)?;
             }
-            RadiationPhase::Done => {}
+            WaveformPhase::Done => {}
         }
         Ok(self.snapshot())
     }
@@ -182,16 +184,16 @@ impl RadiationJob {
     /// Runs every phase to the end.
     ///
     /// # Errors
-    /// As [`RadiationJob::step`].
-    pub fn run(&mut self) -> Result<RadiationSnapshot, InputError> {
-        while self.phase() != RadiationPhase::Done {
+    /// As [`WaveformJob::step`].
+    pub fn run(&mut self) -> Result<WaveformSnapshot, InputError> {
+        while self.phase() != WaveformPhase::Done {
             self.step(usize::MAX / 2)?;
         }
         Ok(self.snapshot())
     }
 
     /// The snapshot without doing more work.
-    pub fn snapshot(&self) -> RadiationSnapshot {
+    pub fn snapshot(&self) -> WaveformSnapshot {
         let b = self.balance.progress();
         let total_map = self.n_theta * self.n_phi;
         let cells_total = self.balance.cells() + total_map + self.spectrum.cells();
@@ -204,13 +206,13 @@ impl RadiationJob {
             (None, None)
         };
         let phase = self.phase();
-        RadiationSnapshot {
+        WaveformSnapshot {
             phase,
-            fraction: if phase == RadiationPhase::Done { 1.0 } else { cells_done as f64 / cells_total as f64 },
+            fraction: if phase == WaveformPhase::Done { 1.0 } else { cells_done as f64 / cells_total as f64 },
             balance_fraction: b.fraction,
             map_fraction: self.map_cells.len() as f64 / total_map as f64,
             spectrum_fraction: self.spectrum.fraction(),
-            done: phase == RadiationPhase::Done,
+            done: phase == WaveformPhase::Done,
             e_rad_flux: b.energy,
             e_rad_closed: e,
             e_rad_rel_diff: rel,
@@ -257,7 +259,7 @@ impl RadiationJob {
     /// The spectrum: ω, dE/(dω dΩ) at the observer (complete from the start), dE/dω over the
     /// sphere once that phase is done (None before), and the two ω → 0 limits: from the memory
     /// in the observer direction (Smarr 1977) and the closed form over the sphere (Di Vecchia
-    /// et al. 2021, prefactor 2GQ²/π; sheet §3).
+    /// et al. 2021, arXiv:2101.05772, with the prefactor 2GQ²/π).
     pub fn spectrum(&self) -> SpectrumCurves<'_> {
         SpectrumCurves {
             omega: self.spectrum.omega(),
@@ -265,13 +267,13 @@ impl RadiationJob {
             de_domega: if self.spectrum.done() { Some(self.spectrum.values()) } else { None },
             zfl_direction: self.zfl_direction,
             zfl_closed: zfl_angle_integrated_closed_form(&self.sys),
-            si: self.si,
+            physical: self.physical,
         }
     }
 }
 
 /// The curves of a spectrum (borrowed; geometric values, G = c = 1, units of M): what
-/// [`RadiationJob::spectrum`] returns and what the spectrum figure draws.
+/// [`WaveformJob::spectrum`] returns and what the spectrum figure draws.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct SpectrumCurves<'a> {
     /// Angular frequency ω, units of c³/(GM).
@@ -285,7 +287,7 @@ pub struct SpectrumCurves<'a> {
     /// ω → 0 limit over the sphere (closed form); ≤ 0 for none.
     pub zfl_closed: f64,
     /// SI factors ([`spectrum_si`]), when the masses are physical: the figure then uses Hz and J/Hz.
-    pub si: Option<SpectrumSi>,
+    pub physical: Option<SpectrumSi>,
 }
 
 #[cfg(test)]
@@ -306,7 +308,7 @@ mod tests {
         for frame in ["rest2", "cm"] {
             let req = request(frame);
             let omega = [0.0005, 0.005, 0.05];
-            let mut job = RadiationJob::new(&req, SkyQuantity::EnergyPerSolidAngle, 6, 12, &omega).unwrap();
+            let mut job = WaveformJob::new(&req, SkyQuantity::EnergyPerSolidAngle, 6, 12, &omega).unwrap();
             let mut last = job.snapshot();
             let mut steps = 0;
             while !last.done {
@@ -321,7 +323,7 @@ mod tests {
             let full = it.run();
             assert_eq!(last.e_rad_flux, full.energy);
             assert_eq!(last.p_rad_flux, full.momentum);
-            // Energy balance against Herrmann et al. 2021 (closed form, sheet §4): the flux
+            // Energy balance against Herrmann et al. 2021 (arXiv:2101.07255, closed form): the flux
             // integral reaches 1e-10 on this rule (energy.rs tests).
             assert!(last.e_rad_rel_diff.unwrap() < 1e-10, "{:?}", last.e_rad_rel_diff);
             assert!(last.p_rad_rel_diff.unwrap() < 1e-9, "{:?}", last.p_rad_rel_diff);
@@ -336,12 +338,12 @@ mod tests {
     #[test]
     fn partial_map_is_blank_below_the_rows_done() {
         let req = request("rest2");
-        let mut job = RadiationJob::new(&req, SkyQuantity::Memory, 8, 10, &[0.01]).unwrap();
-        while job.phase() == RadiationPhase::Balance {
+        let mut job = WaveformJob::new(&req, SkyQuantity::Memory, 8, 10, &[0.01]).unwrap();
+        while job.phase() == WaveformPhase::Balance {
             job.step(50).unwrap();
         }
         let s = job.step(13).unwrap();
-        assert_eq!(s.phase, RadiationPhase::SkyMap);
+        assert_eq!(s.phase, WaveformPhase::SkyMap);
         let m = job.sky_map();
         assert!(m.values[0].iter().all(|v| v.is_finite()));
         assert!(m.values[1][..3].iter().all(|v| v.is_finite()) && m.values[1][3..].iter().all(|v| v.is_nan()));
@@ -353,9 +355,9 @@ mod tests {
     #[test]
     fn refuses_em_and_bad_grids() {
         let mut req = request("rest2");
-        assert_eq!(RadiationJob::new(&req, SkyQuantity::Memory, 0, 10, &[0.1]).unwrap_err().field(), "n_theta");
-        assert_eq!(RadiationJob::new(&req, SkyQuantity::Memory, 4, 10, &[-1.0]).unwrap_err().field(), "omega");
+        assert_eq!(WaveformJob::new(&req, SkyQuantity::Memory, 0, 10, &[0.1]).unwrap_err().field(), "n_theta");
+        assert_eq!(WaveformJob::new(&req, SkyQuantity::Memory, 4, 10, &[-1.0]).unwrap_err().field(), "omega");
         req.force = crate::waveform::WaveformForce::Em;
-        assert_eq!(RadiationJob::new(&req, SkyQuantity::Memory, 4, 10, &[0.1]).unwrap_err().field(), "force");
+        assert_eq!(WaveformJob::new(&req, SkyQuantity::Memory, 4, 10, &[0.1]).unwrap_err().field(), "force");
     }
 }

@@ -249,13 +249,13 @@ pub fn sky(d: &SkyData) -> Figure {
     fig
 }
 
-/// Inputs of the spectrum figure: the core's curves (geometric; `si` converts them for the plot).
+/// Inputs of the spectrum figure: the core's curves (geometric; `physical` converts them for the plot).
 pub type SpectrumData<'a> = chiwave_core::waveform::SpectrumCurves<'a>;
 
 /// dE/(dω dΩ) and dE/dω against ω on log axes (or dE/(df dΩ), dE/df against f in SI), with the
 /// zero-frequency limits marked as dotted levels.
 pub fn spectrum(d: &SpectrumData) -> Figure {
-    let (kx, ky, x_label, y_label, dir, sph) = match d.si {
+    let (kx, ky, x_label, y_label, dir, sph) = match d.physical {
         Some(s) => (
             s.hz_per_omega,
             s.j_per_hz,
@@ -379,12 +379,12 @@ mod tests {
             let f = scene::figure(&req, "sky_memory", &opts).unwrap();
             let heat = f.heat.as_ref().unwrap();
             let ye = &heat.y_edges;
-            assert_eq!(ye.len(), scene::SKY_N_THETA + 1);
+            assert_eq!(ye.len(), chiwave_core::waveform::grids::SKY_N_THETA + 1);
             assert!((ye[0] - top).abs() < 1e-12 && (ye[ye.len() - 1] - bottom).abs() < 1e-12);
             // Row i covers θ ∈ [iπ/n, (i+1)π/n]; its solid angle per unit azimuth is
             // cos θ_i − cos θ_{i+1} (elementary spherical geometry, common practice).
-            let n = scene::SKY_N_THETA as f64;
-            for i in 0..scene::SKY_N_THETA {
+            let n = chiwave_core::waveform::grids::SKY_N_THETA as f64;
+            for i in 0..chiwave_core::waveform::grids::SKY_N_THETA {
                 let (t0, t1) = (i as f64 * std::f64::consts::PI / n, (i + 1) as f64 * std::f64::consts::PI / n);
                 let h = ye[i] - ye[i + 1];
                 if p == "equal_area" {

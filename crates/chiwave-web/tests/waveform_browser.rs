@@ -1,9 +1,9 @@
-//! Binding-layer tests of the radiation exports in headless Chromium: the progressive
-//! `RadiationJob` (steps, snapshot, figures) and its field-named errors. The sums themselves are
+//! Binding-layer tests of the waveform exports in headless Chromium: the progressive
+//! `WaveformJob` (steps, snapshot, figures) and its field-named errors. The sums themselves are
 //! tested natively in chiwave-core (waveform::progressive, tests/waveform.rs).
 #![cfg(target_arch = "wasm32")]
 
-use chiwave_web::{evaluate, figure_names, RadiationJob};
+use chiwave_web::{evaluate, figure_names, WaveformJob};
 use js_sys::{Reflect, JSON};
 use wasm_bindgen::JsValue;
 use wasm_bindgen_test::*;
@@ -19,7 +19,7 @@ const REQ: &str = r#"{"kind":"waveform","m1":1,"m2":2,"gamma":1.3,"b":50,"theta"
 #[wasm_bindgen_test]
 fn job_steps_to_the_same_balance_as_evaluate() {
     let req = JSON::parse(REQ).expect("json");
-    let mut job = RadiationJob::new(req.clone(), "energy").expect("job starts");
+    let mut job = WaveformJob::new(req.clone(), "energy").expect("job starts");
     let first = job.step(0.0).expect("one chunk");
     assert_eq!(get(&first, "done").as_bool(), Some(false));
     assert_eq!(get(&first, "phase").as_string().as_deref(), Some("balance"));
@@ -48,13 +48,13 @@ fn job_steps_to_the_same_balance_as_evaluate() {
 #[wasm_bindgen_test]
 fn job_errors_name_the_field() {
     let req = JSON::parse(REQ).expect("json");
-    let e: JsValue = RadiationJob::new(req.clone(), "flux").err().expect("bad map").into();
+    let e: JsValue = WaveformJob::new(req.clone(), "flux").err().expect("bad map").into();
     assert_eq!(get(&e, "field").as_string().as_deref(), Some("map"));
-    let job = RadiationJob::new(req, "energy").expect("job starts");
+    let job = WaveformJob::new(req, "energy").expect("job starts");
     let e: JsValue = job.sky_figure("mercator").expect_err("bad projection").into();
     assert_eq!(get(&e, "field").as_string().as_deref(), Some("projection"));
     let em = JSON::parse(&REQ.replace(r#""kind":"waveform","#, r#""kind":"waveform","force":"em","q1":0.1,"q2":0.1,"#)).expect("json");
-    let e: JsValue = RadiationJob::new(em, "energy").err().expect("gravity only").into();
+    let e: JsValue = WaveformJob::new(em, "energy").err().expect("gravity only").into();
     assert_eq!(get(&e, "field").as_string().as_deref(), Some("force"));
     assert!(figure_names("waveform").contains(&"em_field".to_string()));
 }

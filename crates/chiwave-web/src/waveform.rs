@@ -1,33 +1,34 @@
-//! The radiation view's progressive sky work: a handle on the core's
-//! [`chiwave_core::waveform::RadiationJob`] (energy balance, sky map, dE/dω over the sphere) that
+//! The waveform view's progressive sky work (the page's "Radiation" view): a handle on the core's
+//! [`chiwave_core::waveform::WaveformJob`] (energy balance, sky map, dE/dω over the sphere) that
 //! the page advances for a few milliseconds per animation frame, and the two figures drawn from
 //! its partial state. No physics here: the sums are the core's, the figures the plot crate's.
 
 use crate::{input_error, js_error, to_js};
 use chiwave_core::request::Request;
 use chiwave_core::waveform::{self, SkyQuantity};
-use chiwave_plot::figures_radiation::{self, Projection, SkyKind};
-use chiwave_plot::scene::{self, SKY_N_PHI, SKY_N_THETA};
+use chiwave_plot::figures_waveform::{self, Projection, SkyKind};
+use chiwave_core::waveform::grids::{self, SKY_N_PHI, SKY_N_THETA};
+use chiwave_plot::scene;
 use wasm_bindgen::prelude::*;
 
 /// Progressive sky integrals of one gravitational waveform request.
 #[wasm_bindgen]
-pub struct RadiationJob {
-    inner: waveform::RadiationJob,
+pub struct WaveformJob {
+    inner: waveform::WaveformJob,
 }
 
 #[wasm_bindgen]
-impl RadiationJob {
+impl WaveformJob {
     /// Starts the sky work for a waveform request: `map` is `"energy"` (dE/dΩ) or `"memory"`
     /// (|DΔh|).
     ///
     /// # Errors
     /// A JS `Error` naming the field: the request's own fields (`force` for em) or `map`.
     #[wasm_bindgen(constructor)]
-    pub fn new(request: JsValue, map: &str) -> Result<RadiationJob, js_sys::Error> {
+    pub fn new(request: JsValue, map: &str) -> Result<WaveformJob, js_sys::Error> {
         let req = match crate::read_request(request)? {
             Request::Waveform(r) => r,
-            _ => return Err(js_error("request", "kind", "kind: RadiationJob needs a request of kind 'waveform'")),
+            _ => return Err(js_error("request", "kind", "kind: WaveformJob needs a request of kind 'waveform'")),
         };
         let quantity = match map {
             "energy" => SkyQuantity::EnergyPerSolidAngle,
@@ -37,15 +38,15 @@ impl RadiationJob {
             }
         };
         let sys = req.gravity_system().map_err(|e| input_error(&e))?.binary;
-        let omega = scene::spectrum_omegas(&sys).map_err(|e| input_error(&e))?;
-        let inner = waveform::RadiationJob::new(&req, quantity, SKY_N_THETA, SKY_N_PHI, &omega)
+        let omega = grids::spectrum_omegas(&sys).map_err(|e| input_error(&e))?;
+        let inner = waveform::WaveformJob::new(&req, quantity, SKY_N_THETA, SKY_N_PHI, &omega)
             .map_err(|e| input_error(&e))?;
-        Ok(RadiationJob { inner })
+        Ok(WaveformJob { inner })
     }
 
     /// Works for about `budget_ms` milliseconds (one direction at a time, so a step
     /// overruns by at most one direction) and returns the snapshot
-    /// (`chiwave_core::waveform::RadiationSnapshot` as a JS object).
+    /// (`chiwave_core::waveform::WaveformSnapshot` as a JS object).
     ///
     /// # Errors
     /// A JS `Error` from a direction (not expected).
@@ -72,7 +73,7 @@ impl RadiationJob {
 
     /// True when every phase is done.
     pub fn done(&self) -> bool {
-        self.inner.phase() == waveform::RadiationPhase::Done
+        self.inner.phase() == waveform::WaveformPhase::Done
     }
 
     /// The sky map as far as it is computed (cells not yet done are blank), rendered in
@@ -88,7 +89,7 @@ impl RadiationJob {
             SkyQuantity::EnergyPerSolidAngle => SkyKind::Energy,
             SkyQuantity::Memory => SkyKind::Memory,
         };
-        let fig = figures_radiation::sky(&figures_radiation::SkyData {
+        let fig = figures_waveform::sky(&figures_waveform::SkyData {
             theta: &map.theta,
             phi: &map.phi,
             values: &map.values,
@@ -108,7 +109,7 @@ impl RadiationJob {
     /// # Errors
     /// A JS `Error` with `kind = "plot"` for a drawing failure.
     pub fn spectrum_figure(&self) -> Result<JsValue, js_sys::Error> {
-        let fig = figures_radiation::spectrum(&self.inner.spectrum());
+        let fig = figures_waveform::spectrum(&self.inner.spectrum());
         let r = chiwave_plot::render_for_page(&fig).map_err(|e| js_error("plot", "figure", &e.to_string()))?;
         to_js(&r)
     }
