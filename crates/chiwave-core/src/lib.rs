@@ -12,17 +12,21 @@
 //! - [`validity`]: regime flags attached to every result.
 //! - [`request`]: the serde request types that the page and the CLI both send.
 //!
+//! Shared tools: [`numeric`] (Gauss–Legendre rules, quadrature, polynomial roots, tolerances),
+//! [`bessel`] (modified Bessel functions K0, K1 for the spectra), [`error`] (the input error).
+//! The layout of the crates and where to add an observable: `docs/architecture.md`.
+//!
 //! Conventions: G = c = 1 inside the physics, lengths in units of a mass stated per module;
 //! electromagnetism in Gaussian units. Errors are values ([`error::InputError`]), never panics.
 #![forbid(unsafe_code)]
 
+pub mod bessel;
 pub mod deflection;
 pub mod encounter;
 pub mod error;
 pub mod lensing;
 pub mod numeric;
 pub mod request;
-pub mod special;
 pub mod two_body;
 pub mod units;
 pub mod validity;

@@ -49,6 +49,34 @@ impl Flag {
     }
 }
 
+/// Smallest dimensionless frequency w = 4GMω/c³ (= 8πGMf/c³, M the lens mass, redshifted for
+/// the lens) at which the `geometric_optics` flag is Ok, for the light and the lens results
+/// alike: ray optics then holds up to corrections of order 1/w ≤ 1% (the amplification factor
+/// F(w, y) tends to its geometric-optics limit with O(1/w) corrections: Takahashi & Nakamura
+/// 2003, astro-ph/0305055). Between w = 1 and this value the flag is a caution; below w = 1
+/// diffraction dominates and the flag is invalid.
+pub const GEOMETRIC_OPTICS_W: f64 = 100.0;
+
+/// The level of the `geometric_optics` flag at dimensionless frequency `w` (see
+/// [`GEOMETRIC_OPTICS_W`]): Ok from it up, Caution from 1, Invalid below 1 (and for NaN).
+///
+/// # Examples
+/// ```
+/// use chiwave_core::validity::{geometric_optics_level, Level};
+/// assert_eq!(geometric_optics_level(150.0), Level::Ok);
+/// assert_eq!(geometric_optics_level(60.0), Level::Caution);
+/// assert_eq!(geometric_optics_level(0.5), Level::Invalid);
+/// ```
+pub fn geometric_optics_level(w: f64) -> Level {
+    if w >= GEOMETRIC_OPTICS_W {
+        Level::Ok
+    } else if w >= 1.0 {
+        Level::Caution
+    } else {
+        Level::Invalid
+    }
+}
+
 /// The worst level among `flags` (Ok for none).
 pub fn worst(flags: &[Flag]) -> Level {
     flags.iter().map(|f| f.level).max().unwrap_or(Level::Ok)

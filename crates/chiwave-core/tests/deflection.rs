@@ -363,7 +363,7 @@ fn solar_system_numbers() {
     assert!(rel_diff(p.alpha_deg.unwrap(), 1.751_201_272_835_835 / 3600.0) < 1e-13);
     // GM☉/c² = 1476.625038050 m (sheet §3); b/M = R☉/(GM/c²), m/R = 2.1225026e-6 (sheet §3).
     assert!((p.gm_over_c2_m - 1_476.625_038_050).abs() < 1e-8);
-    assert!(rel_diff(1.0 / r.impact_parameter, 2.122_502_6e-6) < 1e-7);
+    assert!(rel_diff(1.0 / r.b_over_m, 2.122_502_6e-6) < 1e-7);
     assert_eq!(p.b_m, 6.957e8);
     // Cassini central value γ = 1 + 2.1e-5: 1.7512087130584 arcsec (sheet §3).
     req.ppn_gamma = 1.0 + 2.1e-5;
@@ -470,7 +470,7 @@ fn json_contract() {
     let v = serde_json::to_value(&r).unwrap();
     for key in [
         "alpha", "captured", "critical_b", "closest_approach", "series", "metric", "strong_deflection", "ppn", "flags",
-        "sources", "impact_parameter",
+        "sources", "b_over_m", "impact_parameter",
     ] {
         assert!(v.get(key).is_some(), "missing {key}");
     }

@@ -6,7 +6,7 @@
 #![allow(clippy::excessive_precision)]
 
 use chiwave_core::numeric::{gauss_legendre, rel_diff};
-use chiwave_core::special::{bessel_k0, bessel_k1, x_k0, x_k1};
+use chiwave_core::bessel::{bessel_k0, bessel_k1, x_k0, x_k1};
 use chiwave_core::waveform::em::{
     energies, field, field_parts, memory, sky_energy, spectrum, spectrum_integrated, EmField, EmSystem,
 };

@@ -5,7 +5,7 @@
 // The mpmath values are pasted exactly as the script prints them (17 significant digits).
 #![allow(clippy::excessive_precision)]
 
-use chiwave_core::lensing::special::{kummer_m_imaginary, ln_gamma};
+use chiwave_core::lensing::kummer::{kummer_m_imaginary, ln_gamma};
 use chiwave_core::lensing::wave::{
     amplification, amplification_curve, amplification_factor, amplification_geometric, exact_is_affordable, phi_m,
     Method,
@@ -74,7 +74,7 @@ fn asymptotic_expansion_agrees_with_continuation() {
         assert_eq!(m, Method::Asymptotic, "w={w} y={y}");
         let alpha = 0.5 * w;
         let (kummer, km) = kummer_m_imaginary(alpha, alpha * y * y).unwrap();
-        assert!(matches!(km, chiwave_core::lensing::special::KummerMethod::Continuation { .. }));
+        assert!(matches!(km, chiwave_core::lensing::kummer::KummerMethod::Continuation { .. }));
         let e = Complex64::new(PI * w / 4.0, alpha * (alpha.ln() - 2.0 * phi_m(y)))
             + ln_gamma(Complex64::new(1.0, -alpha)).unwrap();
         let reference = e.exp() * kummer;

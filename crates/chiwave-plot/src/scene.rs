@@ -82,7 +82,7 @@ const RAY_POINTS: usize = 400;
 
 fn light_figure(r: &LightRequest, name: &str, opts: &Options) -> Result<Figure, InputError> {
     let res = r.evaluate()?;
-    let b = res.impact_parameter;
+    let b = res.b_over_m;
     let bc = res.critical_b;
     match name {
         "alpha_b" => {

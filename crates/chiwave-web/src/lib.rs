@@ -86,7 +86,7 @@ pub fn figure(request: JsValue, name: &str, options: JsValue) -> Result<JsValue,
 }
 
 /// α(b) plot data for a light request's lens: `n` log-spaced b/M from `b_min` to `b_max`, the
-/// exact α and every partial sum (`chiwave_core::deflection::Sweep` as a JS object).
+/// exact α and every partial sum (`chiwave_core::deflection::AlphaSweep` as a JS object).
 ///
 /// # Errors
 /// A JS `Error` naming the field (`b_min`, `b_max`, `n`, or the request's own fields).

@@ -16,8 +16,8 @@
 //! * strong-deflection limit: Bozza 2002, gr-qc/0208075 — [`strong`];
 //! * PPN: Will 2014, arXiv:1403.7377; Lambert & Le Poncin-Lafitte 2009, arXiv:0903.1615 — [`ppn`].
 //!
-//! Entry points: [`LightRequest::evaluate`], [`sweep`] (α against b for plots), [`rays`] (ray
-//! paths in the lens plane).
+//! Entry points: [`LightRequest::evaluate`], [`sweep()`] (α against b for plots, an
+//! [`AlphaSweep`]), [`rays`] (ray paths in the lens plane).
 
 pub mod kerr;
 pub mod ppn;
@@ -30,11 +30,13 @@ pub mod strong;
 mod sweep;
 
 pub use rays::{rays, Ray, RayFan};
-pub use sweep::{sweep, Sweep, SweepSeries};
+#[allow(deprecated)]
+pub use sweep::Sweep;
+pub use sweep::{sweep, AlphaSweep, SweepSeries};
 
 use crate::error::{finite, in_closed, InputError};
 use crate::units::{parse_length, parse_mass, AngleUnit, Mass, Quantity};
-use crate::validity::{Flag, Level};
+use crate::validity::{geometric_optics_level, Flag, Level};
 use serde::{Deserialize, Serialize};
 use std::collections::BTreeMap;
 
@@ -273,8 +275,11 @@ pub struct LightResult {
     pub critical_b: f64,
     /// r0/M; `None` when captured.
     pub closest_approach: Option<f64>,
-    /// b/M as used.
-    pub impact_parameter: f64,
+    /// b/M as used (M the lens mass, G = c = 1).
+    pub b_over_m: f64,
+    /// The former key of `b_over_m` (same value), kept for one release.
+    #[serde(rename = "impact_parameter")]
+    pub impact_parameter_alias: f64,
     /// Partial sums of the weak-field series, orders 1..=orders.
     pub series: Vec<SeriesTerm>,
     /// Bozza's log limit beside the exact value (Schwarzschild, not captured; otherwise null).
@@ -413,7 +418,8 @@ impl LightRequest {
             captured: alpha.is_none(),
             critical_b: bc,
             closest_approach: defl.closest_approach(),
-            impact_parameter: v.b,
+            b_over_m: v.b,
+            impact_parameter_alias: v.b,
             series,
             strong_deflection,
             ppn,
@@ -489,12 +495,11 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
     }
     if let Some(lambda) = v.wavelength {
         let w = 8.0 * std::f64::consts::PI / lambda;
-        let (level, msg) = if w >= 100.0 {
-            (Level::Ok, "w = 4π·2M/λ ≫ 1: the wavelength is far below the Schwarzschild radius; geometric optics (rays) holds.")
-        } else if w >= 1.0 {
-            (Level::Caution, "w = 4π·2M/λ is only moderately large: wave-optics corrections (interference, diffraction) of order 1/w matter.")
-        } else {
-            (Level::Invalid, "w = 4π·2M/λ ≲ 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).")
+        let level = geometric_optics_level(w);
+        let msg = match level {
+            Level::Ok => "w = 4π·2M/λ ≫ 1: the wavelength is far below the Schwarzschild radius; geometric optics (rays) holds.",
+            Level::Caution => "w = 4π·2M/λ is only moderately large: wave-optics corrections (interference, diffraction) of order 1/w matter.",
+            Level::Invalid => "w = 4π·2M/λ ≲ 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).",
         };
         out.push(Flag::new("geometric_optics", level, Some(w), msg));
     }

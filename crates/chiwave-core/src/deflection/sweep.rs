@@ -1,12 +1,16 @@
 //! α against b for plots: exact value and every weak-field partial sum on a log-spaced grid.
 //!
 //! No formula of its own: each value comes from `deflection::strong` and `deflection::series`,
-//! whose doc comments give the sources (Darwin 1959 and the weak-field series of the deflection
-//! sheet).
+//! whose doc comments give the sources (Darwin 1959; Keeton & Petters 2005, gr-qc/0511019, and
+//! the series generated in code).
 
 use super::{series, strong, LightRequest, Metric};
 use crate::error::{positive, InputError};
 use serde::Serialize;
+
+/// The former name of [`AlphaSweep`].
+#[deprecated(note = "renamed AlphaSweep")]
+pub type Sweep = AlphaSweep;
 
 /// One partial-sum curve.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -19,7 +23,7 @@ pub struct SweepSeries {
 
 /// α(b) on a grid, for a log–log plot.
 #[derive(Debug, Clone, PartialEq, Serialize)]
-pub struct Sweep {
+pub struct AlphaSweep {
     pub metric: &'static str,
     /// b_c/M: the exact curve ends (capture) and the series diverges below it.
     pub critical_b: f64,
@@ -55,7 +59,7 @@ pub const MAX_SWEEP_POINTS: usize = 100_000;
 /// // mpmath 1.3, tests/reference/deflection_mpmath.py: α(1e4 M) = 0.00040011785240819223402
 /// assert!((s.alpha[4].unwrap() / 4.001_178_524_081_922e-4 - 1.0).abs() < 1e-12);
 /// ```
-pub fn sweep(req: &LightRequest, b_min: f64, b_max: f64, n: usize) -> Result<Sweep, InputError> {
+pub fn sweep(req: &LightRequest, b_min: f64, b_max: f64, n: usize) -> Result<AlphaSweep, InputError> {
     let metric = Metric::new(req.spin, req.charge)?;
     let mut probe = req.clone();
     probe.b = crate::units::Quantity::Number(10.0);
@@ -87,5 +91,5 @@ pub fn sweep(req: &LightRequest, b_min: f64, b_max: f64, n: usize) -> Result<Swe
     let bc = metric.critical_b();
     let strong_deflection = matches!(metric, Metric::Schwarzschild)
         .then(|| b.iter().map(|&bi| strong::limit(bi / bc - 1.0).map(|(lead, _)| lead)).collect());
-    Ok(Sweep { metric: metric.name(), critical_b: bc, b, alpha, series, strong_deflection })
+    Ok(AlphaSweep { metric: metric.name(), critical_b: bc, b, alpha, series, strong_deflection })
 }

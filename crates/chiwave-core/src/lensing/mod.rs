@@ -14,7 +14,7 @@
 //! - The redshifted mass M_Lz = (1 + z_L) M enters the time delay and w; θ_E uses M.
 //! - Waves ∝ e^{−iωt} (see [`wave`]).
 
-pub mod special;
+pub mod kummer;
 pub mod wave;
 
 pub use wave::{amplification_curve, AmplificationCurve};
@@ -23,7 +23,7 @@ use crate::error::InputError;
 use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
 use crate::units::{astro::AU, parse_frequency, parse_length, parse_mass, AngleUnit, Length, Mass, Quantity};
-use crate::validity::{Flag, Level};
+use crate::validity::{geometric_optics_level, Flag, Level};
 use serde::{Deserialize, Serialize};
 use std::collections::BTreeMap;
 
@@ -509,12 +509,11 @@ fn wave_flags(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
             "The interference phase wΔT exceeds what double precision resolves: the oscillating part of F (the phase of the faint image) is not meaningful, only its envelope.",
         ],
     ));
-    let (level, msg) = if w >= 50.0 {
-        (Level::Ok, "w ≫ 1: geometric optics holds to ~1/w; the ray magnifications describe the signal.")
-    } else if w >= 1.0 {
-        (Level::Caution, "w of order 1–50: diffraction changes the amplification by ~1/w; use `amplification`, not the ray magnifications.")
-    } else {
-        (Level::Invalid, "w < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1. The ray magnifications do not describe the signal.")
+    let level = geometric_optics_level(w);
+    let msg = match level {
+        Level::Ok => "w ≫ 1: geometric optics holds to ~1/w; the ray magnifications describe the signal.",
+        Level::Caution => "w of order 1–100: diffraction changes the amplification by ~1/w; use `amplification`, not the ray magnifications.",
+        Level::Invalid => "w < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1. The ray magnifications do not describe the signal.",
     };
     flags.push(Flag::new("geometric_optics", level, Some(w), msg));
     let level = if method == wave::Method::GeometricOptics { Level::Caution } else { Level::Ok };

@@ -12,7 +12,7 @@
 //! Schwarzschild radius); F → F_geo = √|μ₊| − i√|μ₋| e^{iwΔT} as w → ∞, the difference falling
 //! like 1/w; at y = 0, |F|² = πw/(1 − e^{−πw}) (finite, unlike the geometric magnification).
 
-use super::special::{
+use super::kummer::{
     continuation_steps_estimate, kummer_asymptotic_sums, kummer_m_imaginary, ln_gamma, KummerMethod,
 };
 use super::PointLens;

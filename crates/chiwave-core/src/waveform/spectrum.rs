@@ -23,7 +23,7 @@ use super::kernel::{DirectionWaveform, RestKernel};
 use super::memory::memory_braginsky_thorne;
 use super::SkyOptions;
 use crate::error::InputError;
-use crate::special::{bessel_k0_scaled, bessel_k1_scaled};
+use crate::bessel::{bessel_k0_scaled, bessel_k1_scaled};
 use num_complex::Complex64;
 
 impl RestKernel {

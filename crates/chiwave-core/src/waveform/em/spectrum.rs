@@ -4,7 +4,7 @@
 use super::energy::{sphere_nodes, sphere_size};
 use super::system::{Dir, EmSystem};
 use crate::numeric::gauss_legendre;
-use crate::special::{x_k0, x_k1};
+use crate::bessel::{x_k0, x_k1};
 use num_complex::Complex64;
 use std::f64::consts::PI;
 

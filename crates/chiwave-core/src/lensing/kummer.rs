@@ -96,7 +96,7 @@ fn two_sum(a: f64, b: f64) -> (f64, f64) {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::lensing::special::ln_gamma;
+/// use chiwave_core::lensing::kummer::ln_gamma;
 /// use num_complex::Complex64;
 /// // Γ(5) = 24 (elementary).
 /// let g = ln_gamma(Complex64::new(5.0, 0.0)).unwrap().exp();
@@ -253,7 +253,7 @@ pub fn continuation_steps_estimate(amag: f64, t: f64) -> f64 {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::lensing::special::kummer_m_imaginary;
+/// use chiwave_core::lensing::kummer::kummer_m_imaginary;
 /// // M(0.5i, 1, 0.045i) = 0.97762875811396367 − 0.00025121069711748296i
 /// // (mpmath 1.3, mp.dps = 30, hyp1f1(0.5j, 1, 0.045j); tests/reference/lensing_mpmath.py).
 /// let (m, _) = kummer_m_imaginary(0.5, 0.045).unwrap();

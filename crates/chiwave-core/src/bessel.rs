@@ -1,4 +1,5 @@
-//! Special functions used by the spectra: modified Bessel functions of the second kind K0, K1.
+//! Modified Bessel functions of the second kind K0, K1 (and their scaled and x-weighted forms),
+//! used by the spectra.
 //!
 //! Method: the Cephes Chebyshev expansions (S. L. Moshier, Cephes Math Library 2.8, 2000:
 //! `[0, 2]` with K0 + ln(x/2) I0 and K1 − ln(x/2) I1, `(2, ∞)` with e^x √x K), in the pure-Rust
@@ -22,7 +23,7 @@ use spec_math::Bessel;
 /// # Examples
 /// ```
 /// // mpmath 1.3, mp.dps = 40: besselk(0, 1) = 0.42102443824070833...
-/// let k = chiwave_core::special::bessel_k0(1.0);
+/// let k = chiwave_core::bessel::bessel_k0(1.0);
 /// assert!((k - 0.42102443824070833).abs() < 1e-15);
 /// ```
 pub fn bessel_k0(x: f64) -> f64 {
@@ -44,7 +45,7 @@ pub fn bessel_k0(x: f64) -> f64 {
 /// # Examples
 /// ```
 /// // mpmath 1.3, mp.dps = 40: besselk(1, 1) = 0.60190723019723457...
-/// let k = chiwave_core::special::bessel_k1(1.0);
+/// let k = chiwave_core::bessel::bessel_k1(1.0);
 /// assert!((k - 0.60190723019723457).abs() < 1e-15);
 /// ```
 pub fn bessel_k1(x: f64) -> f64 {
@@ -66,7 +67,7 @@ pub fn bessel_k1(x: f64) -> f64 {
 /// # Examples
 /// ```
 /// // mpmath 1.3, mp.dps = 30, tests/reference/waveform_bessel.py: besselk(0, 10)·e^10
-/// let k = chiwave_core::special::bessel_k0_scaled(10.0);
+/// let k = chiwave_core::bessel::bessel_k0_scaled(10.0);
 /// assert!((k - 0.391631934436598666).abs() < 1e-15);
 /// ```
 pub fn bessel_k0_scaled(x: f64) -> f64 {
@@ -91,7 +92,7 @@ pub fn bessel_k0_scaled(x: f64) -> f64 {
 /// # Examples
 /// ```
 /// // mpmath 1.3, mp.dps = 30, tests/reference/waveform_bessel.py: besselk(1, 0.5)·e^0.5
-/// let k = chiwave_core::special::bessel_k1_scaled(0.5);
+/// let k = chiwave_core::bessel::bessel_k1_scaled(0.5);
 /// assert!((k - 2.73100970821178571).abs() < 2e-15);
 /// ```
 pub fn bessel_k1_scaled(x: f64) -> f64 {
@@ -115,7 +116,7 @@ pub fn bessel_k1_scaled(x: f64) -> f64 {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::special::x_k0;
+/// use chiwave_core::bessel::x_k0;
 /// assert_eq!(x_k0(0.0), 0.0);
 /// // mpmath 1.3, mp.dps = 40: 0.5*besselk(0, 0.5) = 0.46220953561383293...
 /// assert!((x_k0(0.5) - 0.46220953561383293).abs() < 1e-15);
@@ -140,7 +141,7 @@ pub fn x_k0(x: f64) -> f64 {
 ///
 /// # Examples
 /// ```
-/// use chiwave_core::special::x_k1;
+/// use chiwave_core::bessel::x_k1;
 /// assert_eq!(x_k1(0.0), 1.0);
 /// // mpmath 1.3, mp.dps = 40: 2*besselk(1, 2) = 0.27973176363304486...
 /// assert!((x_k1(2.0) - 0.27973176363304486).abs() < 1e-15);
