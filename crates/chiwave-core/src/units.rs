@@ -348,6 +348,20 @@ pub enum AngleUnit {
 }
 
 impl AngleUnit {
+    /// Every angle unit, largest first (the order of a unit menu).
+    pub const ALL: [AngleUnit; 5] = [AngleUnit::Rad, AngleUnit::Deg, AngleUnit::Arcsec, AngleUnit::Mas, AngleUnit::Uas];
+
+    /// The name used in requests and JSON (`"rad"`, `"deg"`, `"arcsec"`, `"mas"`, `"uas"`).
+    pub fn key(self) -> &'static str {
+        match self {
+            AngleUnit::Rad => "rad",
+            AngleUnit::Deg => "deg",
+            AngleUnit::Arcsec => "arcsec",
+            AngleUnit::Mas => "mas",
+            AngleUnit::Uas => "uas",
+        }
+    }
+
     /// Radians per unit.
     pub fn radians(self) -> f64 {
         use std::f64::consts::PI;
@@ -508,5 +522,10 @@ mod tests {
         // 1 rad = 206264.80624709636 arcsec (common practice: 648000/π).
         assert!((rad_to_arcsec(1.0) - 206_264.806_247_096_36).abs() < 1e-9);
         assert!((AngleUnit::Uas.from_rad(AngleUnit::Mas.radians()) - 1000.0).abs() < 1e-9);
+        // The keys are the JSON names and parse back.
+        for u in AngleUnit::ALL {
+            assert_eq!(serde_json::to_value(u).unwrap(), u.key());
+            assert_eq!(AngleUnit::parse("angle_unit", u.key()).unwrap(), u);
+        }
     }
 }

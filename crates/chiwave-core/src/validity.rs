@@ -1,8 +1,10 @@
 //! Regime flags shown with every result: where an approximation holds and where it does not.
 //!
-//! A flag has a stable `key` (for scripts), a [`Level`], the number it was judged on, and a
-//! sentence for people that says what breaks. Thresholds are common practice unless a flag's
-//! constructor names a source.
+//! A flag has a stable `key` (for scripts), a short human `label` (for tables and badges: the
+//! page keeps no list of flag names), a [`Level`], the number it was judged on, and a sentence
+//! for people that says what breaks. Each family declares its checks ([`Check`]: key and label)
+//! once, beside their thresholds, in its `flags.rs` (or where its flags are made). Thresholds
+//! are common practice unless a flag's constructor names a source.
 
 use serde::Serialize;
 
@@ -18,11 +20,29 @@ pub enum Level {
     Invalid,
 }
 
+/// The identity of a regime check: its stable key and its short human label.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct Check {
+    /// Stable machine-readable name, e.g. `"weak_field"`.
+    pub key: &'static str,
+    /// Short human name, e.g. `"weak field M/b"` (what the quantity judged is).
+    pub label: &'static str,
+}
+
+impl Check {
+    /// A check with its key and label.
+    pub const fn new(key: &'static str, label: &'static str) -> Self {
+        Check { key, label }
+    }
+}
+
 /// One regime check attached to a result.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct Flag {
     /// Stable machine-readable name, e.g. `"weak_field"`.
     pub key: &'static str,
+    /// Short human name of the check, e.g. `"PM parameter GM/(b v²)"`.
+    pub label: &'static str,
     pub level: Level,
     /// The quantity the judgement was made on (e.g. M/b), when there is one.
     pub value: Option<f64>,
@@ -31,13 +51,14 @@ pub struct Flag {
 }
 
 impl Flag {
-    pub fn new(key: &'static str, level: Level, value: Option<f64>, message: impl Into<String>) -> Self {
-        Flag { key, level, value, message: message.into() }
+    /// A flag of `check` at `level`, judged on `value`, with its `message`.
+    pub fn new(check: Check, level: Level, value: Option<f64>, message: impl Into<String>) -> Self {
+        Flag { key: check.key, label: check.label, level, value, message: message.into() }
     }
 
     /// Grades a small expansion parameter `x` (≥ 0): Ok below `ok`, Caution below `bad`,
     /// Invalid above; the message for each level is given.
-    pub fn small_parameter(key: &'static str, x: f64, ok: f64, bad: f64, msgs: [&str; 3]) -> Self {
+    pub fn small_parameter(check: Check, x: f64, ok: f64, bad: f64, msgs: [&str; 3]) -> Self {
         let (level, msg) = if x < ok {
             (Level::Ok, msgs[0])
         } else if x < bad {
@@ -45,7 +66,7 @@ impl Flag {
         } else {
             (Level::Invalid, msgs[2])
         };
-        Flag::new(key, level, Some(x), msg)
+        Flag::new(check, level, Some(x), msg)
     }
 }
 
@@ -92,9 +113,11 @@ mod tests {
 
     #[test]
     fn grading() {
-        let f = Flag::small_parameter("x", 0.5, 0.01, 0.1, ["a", "b", "c"]);
+        const X: Check = Check::new("x", "the parameter x");
+        let f = Flag::small_parameter(X, 0.5, 0.01, 0.1, ["a", "b", "c"]);
         assert_eq!(f.level, Level::Invalid);
-        let g = Flag::small_parameter("x", 0.001, 0.01, 0.1, ["a", "b", "c"]);
+        assert_eq!((f.key, f.label), ("x", "the parameter x"));
+        let g = Flag::small_parameter(X, 0.001, 0.01, 0.1, ["a", "b", "c"]);
         assert_eq!(g.level, Level::Ok);
         assert_eq!(worst(&[f, g]), Level::Invalid);
         assert_eq!(worst(&[]), Level::Ok);

@@ -130,6 +130,14 @@ pub fn check_scenario(scenario: JsValue) -> Result<JsValue, js_sys::Error> {
     to_js(&s)
 }
 
+/// One angle unit for the page's menus: its request key, label and size in radians.
+#[derive(Serialize)]
+struct AngleUnitInfo {
+    key: &'static str,
+    label: &'static str,
+    rad_per_unit: f64,
+}
+
 #[derive(Serialize)]
 struct Info {
     version: &'static str,
@@ -139,9 +147,12 @@ struct Info {
     speed_units: &'static str,
     frequency_units: &'static str,
     charge_units: &'static str,
+    /// Every output angle unit (`chiwave_core::units::AngleUnit`), so the page keeps no table.
+    angle_units: Vec<AngleUnitInfo>,
 }
 
-/// Static facts for the page: version, the standing notice, the accepted unit lists.
+/// Static facts for the page: version, the standing notice, the accepted unit lists, and the
+/// angle units `[{key, label, rad_per_unit}]`.
 ///
 /// # Errors
 /// Never in practice (serialising static strings).
@@ -156,5 +167,9 @@ pub fn info() -> Result<JsValue, js_sys::Error> {
         speed_units: units::SPEED_UNITS,
         frequency_units: units::FREQUENCY_UNITS,
         charge_units: units::CHARGE_UNITS,
+        angle_units: units::AngleUnit::ALL
+            .iter()
+            .map(|&u| AngleUnitInfo { key: u.key(), label: u.label(), rad_per_unit: u.radians() })
+            .collect(),
     })
 }

@@ -37,6 +37,10 @@ fn good_light_request_gives_a_plain_object() {
     let sources = get(&r, "sources");
     assert!(sources.is_object() && get(&sources, "alpha").is_string(), "sources is an object keyed by output");
     assert!(Array::is_array(&get(&r, "flags")));
+    // Every flag carries its human label from the core.
+    let first = Array::from(&get(&r, "flags")).get(0);
+    assert_eq!(get(&first, "key").as_string().as_deref(), Some("weak_field"));
+    assert_eq!(get(&first, "label").as_string().as_deref(), Some("weak field M/b"));
     assert!(Array::is_array(&get(&r, "series")));
 }
 
@@ -117,5 +121,12 @@ fn generic_figure_and_scenario_and_info() {
     assert_eq!(get(&get(&s, "request"), "kind").as_string().as_deref(), Some("light"));
     let i = info().expect("info");
     assert!(get(&i, "notice").as_string().unwrap_or_default().contains("not a substitute"));
+    // The angle units come from the core's AngleUnit: 1 deg = π/180 rad (definition).
+    let units = Array::from(&get(&i, "angle_units"));
+    assert_eq!(units.length(), 5);
+    let deg = units.get(1);
+    assert_eq!(get(&deg, "key").as_string().as_deref(), Some("deg"));
+    assert_eq!(get(&deg, "rad_per_unit").as_f64(), Some(std::f64::consts::PI / 180.0));
+    assert_eq!(get(&units.get(4), "label").as_string().as_deref(), Some("µas"));
     let _: Object = i.dyn_into().expect("info is an object");
 }

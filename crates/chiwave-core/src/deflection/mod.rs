@@ -36,9 +36,19 @@ pub use sweep::{sweep, AlphaSweep, SweepSeries};
 
 use crate::error::{finite, in_closed, InputError};
 use crate::units::{parse_length, parse_mass, AngleUnit, Mass, Quantity};
-use crate::validity::{geometric_optics_level, Flag, Level};
+use crate::validity::{geometric_optics_level, Check, Flag, Level};
 use serde::{Deserialize, Serialize};
 use std::collections::BTreeMap;
+
+/// The regime checks of this file: stable key and the label shown with it.
+const CAPTURE: Check = Check::new("capture", "capture b/b_c − 1");
+const SERIES_CONVERGENCE: Check = Check::new("series_convergence", "series convergence b_c/b");
+const GEOMETRIC_OPTICS: Check = Check::new("geometric_optics", "geometric optics w");
+const PPN_GAMMA: Check = Check::new("ppn_gamma", "PPN γ");
+const WEAK_FIELD: Check = Check::new("weak_field", "weak field M/b");
+const STRONG_DEFLECTION: Check = Check::new("strong_deflection", "strong-deflection limit b/b_c − 1");
+const BEAM_VS_IMPACT: Check = Check::new("beam_vs_impact", "beam width/b");
+const WAVELENGTH_VS_BEAM: Check = Check::new("wavelength_vs_beam", "wavelength/beam width");
 
 /// Smallest impact parameter accepted in a request, b/M (smaller values are captured anyway).
 pub const B_MIN: f64 = 1e-6;
@@ -436,7 +446,7 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
     let mut out = Vec::new();
     let captured = d <= 0.0;
     out.push(Flag::small_parameter(
-        "weak_field",
+        WEAK_FIELD,
         1.0 / v.b,
         1e-3,
         0.05,
@@ -447,16 +457,16 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
         ],
     ));
     out.push(if captured {
-        Flag::new("capture", Level::Invalid, Some(d), "b ≤ b_c: the ray is captured by the hole; there is no deflection angle (alpha = null).")
+        Flag::new(CAPTURE, Level::Invalid, Some(d), "b ≤ b_c: the ray is captured by the hole; there is no deflection angle (alpha = null).")
     } else if d < 0.01 {
         Flag::new(
-            "capture",
+            CAPTURE,
             Level::Caution,
             Some(d),
             "within 1% of the critical impact parameter: the ray winds near the photon orbit and alpha ∝ −ln(b/b_c − 1) is very sensitive to b.",
         )
     } else {
-        Flag::new("capture", Level::Ok, Some(d), "well outside the capture cross-section (b/b_c − 1 ≥ 0.01).")
+        Flag::new(CAPTURE, Level::Ok, Some(d), "well outside the capture cross-section (b/b_c − 1 ≥ 0.01).")
     });
     let ratio = 1.0 / (d + 1.0);
     let note = match v.metric {
@@ -465,24 +475,24 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
     };
     out.push(if ratio >= 1.0 {
         Flag::new(
-            "series_convergence",
+            SERIES_CONVERGENCE,
             Level::Invalid,
             Some(ratio),
             format!("b ≤ b_c: the weak-field series diverges, its partial sums approximate nothing{note}."),
         )
     } else if ratio > 0.5 {
         Flag::new(
-            "series_convergence",
+            SERIES_CONVERGENCE,
             Level::Caution,
             Some(ratio),
             format!("the series converges only for b > b_c; here its terms shrink only like (b_c/b)^n, so low orders are far off{note}."),
         )
     } else {
-        Flag::new("series_convergence", Level::Ok, Some(ratio), format!("b > 2 b_c: the series converges, terms shrink at least like 2^-n{note}."))
+        Flag::new(SERIES_CONVERGENCE, Level::Ok, Some(ratio), format!("b > 2 b_c: the series converges, terms shrink at least like 2^-n{note}."))
     });
     if matches!(v.metric, Metric::Schwarzschild) && !captured {
         out.push(Flag::small_parameter(
-            "strong_deflection",
+            STRONG_DEFLECTION,
             d,
             1e-3,
             0.05,
@@ -501,11 +511,11 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
             Level::Caution => "w = 4π·2M/λ is only moderately large: wave-optics corrections (interference, diffraction) of order 1/w matter.",
             Level::Invalid => "w = 4π·2M/λ ≲ 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).",
         };
-        out.push(Flag::new("geometric_optics", level, Some(w), msg));
+        out.push(Flag::new(GEOMETRIC_OPTICS, level, Some(w), msg));
     }
     if let Some(l) = v.beam {
         out.push(Flag::small_parameter(
-            "beam_vs_impact",
+            BEAM_VS_IMPACT,
             l / v.b,
             0.01,
             0.1,
@@ -517,7 +527,7 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
         ));
         if let Some(lambda) = v.wavelength {
             out.push(Flag::small_parameter(
-                "wavelength_vs_beam",
+                WAVELENGTH_VS_BEAM,
                 lambda / l,
                 0.01,
                 0.1,
@@ -531,7 +541,7 @@ fn flags(v: &Validated, d: f64) -> Vec<Flag> {
     }
     if v.gamma != 1.0 {
         out.push(Flag::new(
-            "ppn_gamma",
+            PPN_GAMMA,
             Level::Caution,
             Some(v.gamma),
             "γ ≠ 1 rescales only the first series term and the ppn block; alpha stays the exact GR value.",

@@ -61,9 +61,14 @@ use crate::error::InputError;
 use crate::numeric::poly;
 use crate::numeric::quadrature::{adaptive_gl, integrate_gl, integrate_panels, QuadratureFailure};
 use crate::numeric::{cached_rule, Rule};
-use crate::validity::{Flag, Level};
+use crate::validity::{Check, Flag, Level};
 use serde::Serialize;
 use std::f64::consts::{FRAC_PI_2, PI};
+
+/// The regime checks of this file: stable key and the label shown with it.
+const EOB_ESTIMATE: Check = Check::new("eob_estimate", "resummed estimate");
+const EOB_NEAR_CAPTURE: Check = Check::new("eob_near_capture", "estimate near capture j/j_c");
+const EOB_LOW_VELOCITY: Check = Check::new("eob_low_velocity", "estimate at low velocity p∞");
 
 /// Largest number of angle coefficients χ_1 … χ_n accepted.
 pub const MAX_COEFFICIENTS: usize = 8;
@@ -727,30 +732,30 @@ pub fn details(gamma: f64, nu: f64, j: f64, chi: &[f64]) -> Result<Details, Inpu
         Estimate::Scattered { .. } => critical(&pot, u_w(&pot), None)?,
     };
     let mut flags = vec![Flag::new(
-        "eob_estimate",
+        EOB_ESTIMATE,
         Level::Caution,
         None,
         "Strong-field estimate: PM angle coefficients resummed into an effective-one-body radial potential (Damour 2018; Damour & Rettegno 2023); not an exact result.",
     )];
     match (est, jc) {
         (Estimate::Captured { .. }, Some(c)) => flags.push(Flag::new(
-            "eob_near_capture",
+            EOB_NEAR_CAPTURE,
             Level::Caution,
             Some(j / c),
             "The model predicts capture (j below its critical j); no scattering angle.",
         )),
         (Estimate::Scattered { .. }, Some(c)) if j < 1.5 * c => flags.push(Flag::new(
-            "eob_near_capture",
+            EOB_NEAR_CAPTURE,
             Level::Caution,
             Some(j / c),
             "Strong field: close to the model's capture threshold; the angle depends logarithmically on j − j_crit and on the truncation of the potential.",
         )),
-        (_, Some(c)) => flags.push(Flag::new("eob_near_capture", Level::Ok, Some(j / c), "Far from capture.")),
+        (_, Some(c)) => flags.push(Flag::new(EOB_NEAR_CAPTURE, Level::Ok, Some(j / c), "Far from capture.")),
         (_, None) => {}
     }
     if pot.p_inf < 1e-3 {
         flags.push(Flag::new(
-            "eob_low_velocity",
+            EOB_LOW_VELOCITY,
             Level::Caution,
             Some(pot.p_inf),
             "Low velocity: reconstructing w_3 from χ_3 cancels terms of order p∞^-3; digits are lost.",

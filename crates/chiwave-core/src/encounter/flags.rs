@@ -3,11 +3,26 @@
 
 use crate::error::InputError;
 use crate::two_body::Kinematics;
-use crate::validity::{Flag, Level};
+use crate::validity::{Check, Flag, Level};
+
+/// The regime checks of this file: stable key and the label shown with it.
+const STRONG_FIELD_ESTIMATE: Check = Check::new("strong_field_estimate", "strong-field estimate");
+const CAPTURE_PROXIMITY: Check = Check::new("capture_proximity", "capture proximity j/j_c");
+const HIGH_ENERGY: Check = Check::new("high_energy", "energy γ");
+const UNITS: Check = Check::new("units", "units");
+const FALL_TO_CENTRE: Check = Check::new("fall_to_centre", "fall to centre κ");
+const CLASSICAL_SOMMERFELD: Check = Check::new("classical_sommerfeld", "Sommerfeld parameter");
+const VELOCITY_REGIME: Check = Check::new("velocity_regime", "velocity v/c");
+const PM_PARAMETER: Check = Check::new("pm_parameter", "PM parameter GM/(b v²)");
+const PM_TRUNCATION: Check = Check::new("pm_truncation", "3PM share of χ");
+const PL_PARAMETER: Check = Check::new("pl_parameter", "PL parameter |κ|/p∞");
+const THREE_PL_TWO_BODY: Check = Check::new("three_pl_two_body", "two-body 3PL ν");
+const DIPOLE_NONRELATIVISTIC: Check = Check::new("dipole_nonrelativistic", "dipole E_rad v/c");
+const CLASSICAL_COMPTON: Check = Check::new("classical_compton", "Compton λ/b");
 
 /// The strong-field estimate could not be evaluated (its own flags are pushed otherwise).
 pub(crate) fn estimate_unavailable(err: &InputError) -> Flag {
-    Flag::new("strong_field_estimate", Level::Caution, None, format!("Strong-field estimate unavailable: {err}."))
+    Flag::new(STRONG_FIELD_ESTIMATE, Level::Caution, None, format!("Strong-field estimate unavailable: {err}."))
 }
 
 /// Flags of the PM series: expansion parameter, distance from capture, speed, energy, truncation.
@@ -16,7 +31,7 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
     let s = &k.speed;
     let pm_x = 1.0 / (k.b_over_gm * s.v * s.v);
     flags.push(Flag::small_parameter(
-        "pm_parameter",
+        PM_PARAMETER,
         pm_x,
         0.05,
         0.3,
@@ -28,20 +43,20 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
     ));
     let ratio = k.j / j_c;
     flags.push(if ratio <= 1.0 {
-        Flag::new("capture_proximity", Level::Invalid, Some(ratio), "Below the test-body capture threshold (j ≤ j_c): a test body would be captured; PM numbers have no meaning.")
+        Flag::new(CAPTURE_PROXIMITY, Level::Invalid, Some(ratio), "Below the test-body capture threshold (j ≤ j_c): a test body would be captured; PM numbers have no meaning.")
     } else if ratio < 2.0 {
-        Flag::new("capture_proximity", Level::Caution, Some(ratio), "Within a factor 2 of the test-body capture threshold j_c: strong field, PM series unreliable.")
+        Flag::new(CAPTURE_PROXIMITY, Level::Caution, Some(ratio), "Within a factor 2 of the test-body capture threshold j_c: strong field, PM series unreliable.")
     } else {
-        Flag::new("capture_proximity", Level::Ok, Some(ratio), "Far from the test-body capture threshold (j > 2 j_c).")
+        Flag::new(CAPTURE_PROXIMITY, Level::Ok, Some(ratio), "Far from the test-body capture threshold (j > 2 j_c).")
     });
     flags.push(velocity(s.v));
     flags.push(if s.gamma > 10.0 {
-        Flag::new("high_energy", Level::Caution, Some(s.gamma), "γ > 10: the conservative-only 3PM term grows like −8γ³ ln(2γ); only the radiation-reacted 3PM value (key 3pm) is physical (Damour 2020, arXiv:2010.01641).")
+        Flag::new(HIGH_ENERGY, Level::Caution, Some(s.gamma), "γ > 10: the conservative-only 3PM term grows like −8γ³ ln(2γ); only the radiation-reacted 3PM value (key 3pm) is physical (Damour 2020, arXiv:2010.01641).")
     } else {
-        Flag::new("high_energy", Level::Ok, Some(s.gamma), "γ ≤ 10: conservative and radiation-reacted 3PM both shown; the radiation-reacted one (key 3pm) is the physical value.")
+        Flag::new(HIGH_ENERGY, Level::Ok, Some(s.gamma), "γ ≤ 10: conservative and radiation-reacted 3PM both shown; the radiation-reacted one (key 3pm) is the physical value.")
     });
     flags.push(Flag::small_parameter(
-        "pm_truncation",
+        PM_TRUNCATION,
         pm3_share,
         1e-3,
         0.1,
@@ -57,9 +72,9 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
 /// speed, the omitted two-body 3PL part, the dipole formula's speed.
 pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool) -> Vec<Flag> {
     let s = &k.speed;
-    let mut flags = vec![Flag::new("units", Level::Ok, None, "Gaussian units with c = 1 (Coulomb force q1 q2/r²); SI charges were converted with q1 q2 → q1 q2/(4π ε0).")];
+    let mut flags = vec![Flag::new(UNITS, Level::Ok, None, "Gaussian units with c = 1 (Coulomb force q1 q2/r²); SI charges were converted with q1 q2 → q1 q2/(4π ε0).")];
     flags.push(Flag::small_parameter(
-        "pl_parameter",
+        PL_PARAMETER,
         kappa.abs() / s.p_inf,
         0.05,
         0.3,
@@ -70,13 +85,13 @@ pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool) -> Vec<Fla
         ],
     ));
     flags.push(if fall {
-        Flag::new("fall_to_centre", Level::Invalid, Some(kappa), "Attraction with |κ| ≥ 1: the test charge falls to the centre (no scattering angle).")
+        Flag::new(FALL_TO_CENTRE, Level::Invalid, Some(kappa), "Attraction with |κ| ≥ 1: the test charge falls to the centre (no scattering angle).")
     } else {
-        Flag::new("fall_to_centre", Level::Ok, Some(kappa), "No fall to the centre (κ > −1).")
+        Flag::new(FALL_TO_CENTRE, Level::Ok, Some(kappa), "No fall to the centre (κ > −1).")
     });
     flags.push(velocity(s.v));
     flags.push(Flag::small_parameter(
-        "three_pl_two_body",
+        THREE_PL_TWO_BODY,
         k.nu,
         0.01,
         0.3,
@@ -87,7 +102,7 @@ pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool) -> Vec<Fla
         ],
     ));
     flags.push(Flag::small_parameter(
-        "dipole_nonrelativistic",
+        DIPOLE_NONRELATIVISTIC,
         s.v,
         0.1,
         0.3,
@@ -104,14 +119,14 @@ pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool) -> Vec<Fla
 /// Compton wavelength of the lighter body over b.
 pub(crate) fn physical(flags: &mut Vec<Flag>, sommerfeld: f64, compton_over_b: f64) {
     flags.push(if sommerfeld > 1e3 {
-        Flag::new("classical_sommerfeld", Level::Ok, Some(sommerfeld), "Sommerfeld parameter ≫ 1: classical scattering applies.")
+        Flag::new(CLASSICAL_SOMMERFELD, Level::Ok, Some(sommerfeld), "Sommerfeld parameter ≫ 1: classical scattering applies.")
     } else if sommerfeld > 1.0 {
-        Flag::new("classical_sommerfeld", Level::Caution, Some(sommerfeld), "Sommerfeld parameter only moderately above 1: quantum corrections to the classical angle may be visible.")
+        Flag::new(CLASSICAL_SOMMERFELD, Level::Caution, Some(sommerfeld), "Sommerfeld parameter only moderately above 1: quantum corrections to the classical angle may be visible.")
     } else {
-        Flag::new("classical_sommerfeld", Level::Invalid, Some(sommerfeld), "Sommerfeld parameter ≤ 1: the encounter is quantum (Born regime); the classical angle does not apply.")
+        Flag::new(CLASSICAL_SOMMERFELD, Level::Invalid, Some(sommerfeld), "Sommerfeld parameter ≤ 1: the encounter is quantum (Born regime); the classical angle does not apply.")
     });
     flags.push(Flag::small_parameter(
-        "classical_compton",
+        CLASSICAL_COMPTON,
         compton_over_b,
         1e-3,
         1.0,
@@ -126,8 +141,8 @@ pub(crate) fn physical(flags: &mut Vec<Flag>, sommerfeld: f64, compton_over_b: f
 /// The speed regime (always Ok: it says which regime the series are in).
 fn velocity(v: f64) -> Flag {
     if v < 0.1 {
-        Flag::new("velocity_regime", Level::Ok, Some(v), "Slow encounter (v < 0.1 c): post-Newtonian regime; PM/PL series need p∞ j ≫ 1.")
+        Flag::new(VELOCITY_REGIME, Level::Ok, Some(v), "Slow encounter (v < 0.1 c): post-Newtonian regime; PM/PL series need p∞ j ≫ 1.")
     } else {
-        Flag::new("velocity_regime", Level::Ok, Some(v), "Relativistic encounter (v ≥ 0.1 c).")
+        Flag::new(VELOCITY_REGIME, Level::Ok, Some(v), "Relativistic encounter (v ≥ 0.1 c).")
     }
 }

@@ -23,9 +23,18 @@ use crate::error::InputError;
 use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
 use crate::units::{astro::AU, parse_frequency, parse_length, parse_mass, AngleUnit, Length, Mass, Quantity};
-use crate::validity::{geometric_optics_level, Flag, Level};
+use crate::validity::{geometric_optics_level, Check, Flag, Level};
 use serde::{Deserialize, Serialize};
 use std::collections::BTreeMap;
+
+/// The regime checks of this file: stable key and the label shown with it.
+const DISTANCES: Check = Check::new("distances", "distances");
+const LENSING_STRENGTH: Check = Check::new("lensing_strength", "source offset β/θ_E");
+const GEOMETRIC_OPTICS: Check = Check::new("geometric_optics", "geometric optics w");
+const AMPLIFICATION_METHOD: Check = Check::new("amplification_method", "amplification method");
+const THIN_LENS: Check = Check::new("thin_lens", "thin lens 4GM/(c²R_E)");
+const EINSTEIN_ANGLE: Check = Check::new("einstein_angle", "Einstein angle θ_E");
+const INTERFERENCE_PHASE: Check = Check::new("interference_phase", "interference phase wΔT");
 
 /// Smallest accepted offset u = β/θ_E (the point-source magnification ≈ 1/u diverges at 0).
 pub const OFFSET_MIN: f64 = 1e-10;
@@ -444,7 +453,7 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
     // Deflection at the Einstein ring, 4GM/(c² R_E): the thin-lens formulas are its first order.
     let alpha_e = 4.0 * gm / (C * C) / r_e;
     flags.push(Flag::small_parameter(
-        "thin_lens",
+        THIN_LENS,
         alpha_e,
         1e-4,
         1e-2,
@@ -455,7 +464,7 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
         ],
     ));
     flags.push(Flag::small_parameter(
-        "einstein_angle",
+        EINSTEIN_ANGLE,
         theta,
         1e-3,
         1e-1,
@@ -467,14 +476,14 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
     ));
     if z_l > 0.0 {
         flags.push(Flag::new(
-            "distances",
+            DISTANCES,
             Level::Caution,
             Some(z_l),
             "Lens at a cosmological redshift: θ_E and R_E use D_LS = D_S − D_L (flat space); for a cosmological lens give angular-diameter distances and note that D_LS ≠ D_S − D_L. The redshifted mass (1 + z_L)M is applied to the time delay and w.",
         ));
     } else {
         flags.push(Flag::new(
-            "distances",
+            DISTANCES,
             Level::Ok,
             Some(0.0),
             "Flat-space distances, D_LS = D_S − D_L (Galactic lens).",
@@ -489,7 +498,7 @@ fn point_lens_flags(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag
     } else {
         (Level::Ok, "Weak lensing regime (u ≥ 10): μ_tot − 1 ≈ 2/u⁴, the saddle image is negligible.")
     };
-    flags.push(Flag::new("lensing_strength", level, Some(u), msg));
+    flags.push(Flag::new(LENSING_STRENGTH, level, Some(u), msg));
     flags
 }
 
@@ -499,7 +508,7 @@ fn wave_flags(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
     // The interference phase wΔT (value, radians) is carried in f64: its absolute error is
     // ~1e-16·wΔT rad, 1e-6 rad at 1e10 and 1e-2 rad at 1e14.
     flags.push(Flag::small_parameter(
-        "interference_phase",
+        INTERFERENCE_PHASE,
         w * delta_t,
         1e10,
         1e14,
@@ -515,13 +524,13 @@ fn wave_flags(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
         Level::Caution => "w of order 1–100: diffraction changes the amplification by ~1/w; use `amplification`, not the ray magnifications.",
         Level::Invalid => "w < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1. The ray magnifications do not describe the signal.",
     };
-    flags.push(Flag::new("geometric_optics", level, Some(w), msg));
+    flags.push(Flag::new(GEOMETRIC_OPTICS, level, Some(w), msg));
     let level = if method == wave::Method::GeometricOptics { Level::Caution } else { Level::Ok };
     let value = match method {
         wave::Method::Continuation { steps } => Some(steps as f64),
         _ => None,
     };
-    flags.push(Flag::new("amplification_method", level, value, method.describe()));
+    flags.push(Flag::new(AMPLIFICATION_METHOD, level, value, method.describe()));
     flags
 }
 

@@ -4,7 +4,17 @@
 use super::em::{EmEnergies, EmSystem};
 use super::frames::Binary;
 use crate::encounter::pm;
-use crate::validity::{Flag, Level};
+use crate::validity::{Check, Flag, Level};
+
+/// The regime checks of this file: stable key and the label shown with it.
+const F_CHAR_RULE: Check = Check::new("f_char_rule", "f_char rule of thumb");
+const FLUX_RESOLUTION: Check = Check::new("flux_resolution", "flux-integral resolution");
+const B_WEAK_FIELD: Check = Check::new("b_weak_field", "impact parameter b/(GM/c²)");
+const UNITS: Check = Check::new("units", "units");
+const WEAK_DEFLECTION: Check = Check::new("weak_deflection", "LO deflection angle");
+const EM_DEFLECTION: Check = Check::new("em_deflection", "deflection and recoil");
+const EM_BEAMING: Check = Check::new("em_beaming", "beaming γ");
+const GRAVITY_NEGLECTED: Check = Check::new("gravity_neglected", "gravity against Coulomb G m1 m2/|q1 q2|");
 
 /// Impact parameter below which the gravitational LO waveform is flagged invalid: 3√3 GM/c², the
 /// photon-capture impact parameter of a Schwarzschild mass (Misner, Thorne & Wheeler 1973, §25.6;
@@ -20,7 +30,7 @@ pub(crate) fn gravity(sys: &Binary, b_over_gm: f64, energy_flux: bool) -> Vec<Fl
     let gamma = sys.gamma;
     let mut flags = vec![b_weak_field(b_over_gm)];
     flags.push(Flag::small_parameter(
-        "weak_deflection",
+        WEAK_DEFLECTION,
         pm::chi_1pm_at_b(gamma, sys.cm_energy_ratio(), b_over_gm),
         0.05,
         0.3,
@@ -32,14 +42,14 @@ pub(crate) fn gravity(sys: &Binary, b_over_gm: f64, energy_flux: bool) -> Vec<Fl
     ));
     let v = sys.v();
     flags.push(Flag::new(
-        "f_char_rule",
+        F_CHAR_RULE,
         if v < 0.3 { Level::Ok } else { Level::Caution },
         Some(v),
         "f_char = v/(2πb) is a rule of thumb for v ≪ c (not fitted); forward-beamed radiation is Doppler-raised by about γ/(1 − v cos θ).",
     ));
     if energy_flux && gamma > 3.0 {
         flags.push(Flag::new(
-            "flux_resolution",
+            FLUX_RESOLUTION,
             Level::Caution,
             Some(gamma),
             "Above γ = 3 the sky grid of the flux integral was not tuned to 1e-10 (tests reach 1e-10 for γ ≤ 2 and about 1e-8 at γ = 3); compare e_rad_flux with e_rad_closed.",
@@ -63,7 +73,7 @@ fn b_weak_field(b_over_m: f64) -> Flag {
     } else {
         (Level::Ok, "b ≫ GM/c²: the weak-deflection expansion of the waveform applies")
     };
-    Flag::new("b_weak_field", level, Some(b_over_m), msg)
+    Flag::new(B_WEAK_FIELD, level, Some(b_over_m), msg)
 }
 
 /// Flags of the straight-line (first-order) electromagnetic field.
@@ -77,7 +87,7 @@ pub(crate) fn em_system(sys: &EmSystem) -> Vec<Flag> {
     let x = (dp / (sys.gamma * sys.m1 * v)).max(dp / (sys.m2 * v));
     vec![
         Flag::small_parameter(
-            "em_deflection",
+            EM_DEFLECTION,
             x,
             0.01,
             0.1,
@@ -88,7 +98,7 @@ pub(crate) fn em_system(sys: &EmSystem) -> Vec<Flag> {
             ],
         ),
         Flag::small_parameter(
-            "em_beaming",
+            EM_BEAMING,
             sys.gamma,
             100.0,
             f64::INFINITY,
@@ -108,7 +118,7 @@ pub(crate) fn electromagnetic(sys: &EmSystem, energies: Option<&EmEnergies>) -> 
     // Gravity between the bodies is left out of this force law: compare the couplings.
     let g_over_q = sys.m1 * sys.m2 / (sys.q1 * sys.q2).abs();
     flags.push(Flag::small_parameter(
-        "gravity_neglected",
+        GRAVITY_NEGLECTED,
         g_over_q,
         0.01,
         0.3,
@@ -119,7 +129,7 @@ pub(crate) fn electromagnetic(sys: &EmSystem, energies: Option<&EmEnergies>) -> 
         ],
     ));
     flags.push(Flag::new(
-        "units",
+        UNITS,
         Level::Ok,
         None,
         "Gaussian units with c = 1 (Coulomb force q1 q2/r²); SI charges were converted with q1 q2 → q1 q2/(4π ε0).",
@@ -127,7 +137,7 @@ pub(crate) fn electromagnetic(sys: &EmSystem, energies: Option<&EmEnergies>) -> 
     if let Some(e) = energies {
         if e.rel_error_estimate > 1e-8 {
             flags.push(Flag::new(
-                "flux_resolution",
+                FLUX_RESOLUTION,
                 Level::Caution,
                 Some(e.rel_error_estimate),
                 "The estimated relative error of e_rad_flux exceeds 1e-8; compare with e_rad_closed.",
