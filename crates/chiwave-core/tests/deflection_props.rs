@@ -1,23 +1,11 @@
 //! Property tests for light deflection: monotonicity, series convergence, and robustness to
 //! any f64 in every numeric input (no panic; an error that names the field).
 
-use chiwave_core::deflection::{rays, sweep, LightRequest, Metric};
-use proptest::prelude::*;
+mod common;
 
-fn any_f64() -> impl Strategy<Value = f64> {
-    prop_oneof![
-        proptest::num::f64::ANY,
-        -2.0f64..2.0,
-        0.0f64..20.0,
-        Just(f64::NAN),
-        Just(f64::INFINITY),
-        Just(f64::NEG_INFINITY),
-        Just(0.0),
-        Just(-0.0),
-        Just(1.0),
-        Just(-1.0),
-    ]
-}
+use chiwave_core::deflection::{rays, sweep, LightRequest, Metric};
+use common::any_f64;
+use proptest::prelude::*;
 
 const FIELDS: [&str; 15] = [
     "b", "mass", "spin", "charge", "ppn_gamma", "orders", "wavelength", "beam_width", "elongation_deg", "b_min", "b_max",

@@ -5,6 +5,8 @@
 // The mpmath values are pasted with all 17 printed digits.
 #![allow(clippy::excessive_precision)]
 
+mod common;
+
 use chiwave_core::numeric::{gauss_legendre, rel_diff};
 use chiwave_core::bessel::{bessel_k0, bessel_k1, x_k0, x_k1};
 use chiwave_core::waveform::em::{
@@ -104,19 +106,9 @@ fn constructor_names_field_and_range() {
 
 mod props {
     use super::*;
+    use common::any_f64;
     use proptest::prelude::*;
 
-    fn any_f64() -> impl Strategy<Value = f64> {
-        prop_oneof![
-            any::<f64>(),
-            Just(0.0),
-            Just(1.0),
-            Just(1.0 + 1e-16),
-            Just(f64::NAN),
-            Just(f64::INFINITY),
-            -10.0..10.0f64
-        ]
-    }
 
     proptest! {
         #![proptest_config(ProptestConfig::with_cases(128))]

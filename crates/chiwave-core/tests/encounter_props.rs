@@ -2,25 +2,12 @@
 // Reference values are quoted with every digit the reference script printed.
 #![allow(clippy::excessive_precision, clippy::inconsistent_digit_grouping)]
 
+mod common;
+
 use chiwave_core::encounter::{chi_sweep, nr, EncounterRequest, EncounterResult, Force, SweepVar};
 use chiwave_core::units::Quantity;
+use common::any_f64;
 use proptest::prelude::*;
-
-fn any_f64() -> impl Strategy<Value = f64> {
-    prop_oneof![
-        Just(f64::NAN),
-        Just(f64::INFINITY),
-        Just(f64::NEG_INFINITY),
-        Just(0.0),
-        Just(-0.0),
-        Just(f64::MIN_POSITIVE),
-        Just(f64::MAX),
-        any::<f64>(),
-        -10.0..10.0f64,
-        0.0..1.0f64,
-        1.0..1e4f64,
-    ]
-}
 
 fn opt_q() -> impl Strategy<Value = Option<Quantity>> {
     prop_oneof![

@@ -1,26 +1,15 @@
 //! Property tests: no panic and a named error for any f64 in every field; F → 1 as w → 0.
 
+mod common;
+
 use chiwave_core::lensing::wave::{amplification, amplification_factor, amplification_geometric};
 use chiwave_core::lensing::{magnification_curve, LensRequest, PointLens};
 use chiwave_core::units::Quantity;
+use common::any_f64;
 use proptest::prelude::*;
 
 const FIELDS: [&str; 6] = ["mass", "lens_distance", "source_distance", "offset", "frequency", "lens_redshift"];
 
-fn any_f64() -> impl Strategy<Value = f64> {
-    prop_oneof![
-        any::<f64>(),
-        Just(f64::NAN),
-        Just(f64::INFINITY),
-        Just(f64::NEG_INFINITY),
-        Just(0.0),
-        Just(-0.0),
-        Just(f64::MIN_POSITIVE),
-        Just(f64::MAX),
-        -10.0..10.0f64,
-        1e-12..1e12f64,
-    ]
-}
 
 fn unit() -> impl Strategy<Value = &'static str> {
     prop_oneof![Just(""), Just("Msun"), Just("kg"), Just("kpc"), Just("pc"), Just("m"), Just("Hz"), Just("kHz"), Just("xyz")]

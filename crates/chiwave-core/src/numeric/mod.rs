@@ -20,12 +20,21 @@ use std::sync::OnceLock;
 /// Nodes and weights of a Gauss–Legendre rule on [-1, 1].
 pub type Rule = (Vec<f64>, Vec<f64>);
 
-/// Relative tolerance for a closed form against an independent quadrature in f64.
-pub const REL_QUADRATURE: f64 = 1e-12;
+/// Relative tolerance for one value computed by two algebraically identical formulas a rounding
+/// or two apart (a product regrouped, a constant folded).
+pub const REL_ONE_ROUNDING: f64 = 1e-15;
+/// Relative tolerance for one quantity computed two ways in a few tens of f64 operations (a sum
+/// regrouped, two short closed forms, a unit conversion without cancellation).
+pub const REL_FEW_OPS: f64 = 1e-14;
 /// Relative tolerance for identities that only involve rounding (on-shell, symmetries).
 pub const REL_ROUNDING: f64 = 1e-13;
+/// Relative tolerance for a closed form against an independent quadrature in f64.
+pub const REL_QUADRATURE: f64 = 1e-12;
 /// Relative tolerance for comparisons with values transcribed to 12–15 digits.
 pub const REL_TRANSCRIBED: f64 = 1e-11;
+/// Relative tolerance for a sky or flux integral on the production rules against the closed
+/// form it must reproduce (the rules are sized for it: `waveform::SkyOptions::for_gamma`).
+pub const REL_SKY_RULE: f64 = 1e-10;
 
 /// Nodes and weights of the n-point Gauss–Legendre rule on [-1, 1].
 ///
