@@ -28,7 +28,7 @@ proptest! {
         let a1 = m.deflection(b1).unwrap().alpha().unwrap();
         let a2 = m.deflection(b2).unwrap().alpha().unwrap();
         prop_assert!(a2 < a1, "spin={spin} Q={charge}: α({b1}) = {a1}, α({b2}) = {a2}");
-        prop_assert!(a2 > 0.0);
+        prop_assert!(a2 > 0.0); // deflection toward the lens
     }
 
     /// For b ≫ M each added order shrinks the error (Schwarzschild, strictly, until the f64
@@ -41,7 +41,7 @@ proptest! {
         let r = req.evaluate().unwrap();
         let e: Vec<f64> = r.series.iter().map(|s| s.rel_error.unwrap().abs()).collect();
         for n in 0..11 {
-            if e[n] > 1e-13 {
+            if e[n] > 1e-13 { // above the f64 noise floor ~1e-14 (doc above)
                 prop_assert!(e[n + 1] < e[n], "b={b}: order {} error {} ≥ order {} error {}", n + 2, e[n + 1], n + 1, e[n]);
             }
         }
@@ -49,7 +49,7 @@ proptest! {
         req.charge = charge;
         let r = req.evaluate().unwrap();
         let e: Vec<f64> = r.series.iter().map(|s| s.rel_error.unwrap().abs()).collect();
-        prop_assert!(e[5] < e[0] && (e[11] < e[5] || e[11] < 1e-13), "b={b} a={spin} Q={charge}: {e:?}");
+        prop_assert!(e[5] < e[0] && (e[11] < e[5] || e[11] < 1e-13), "b={b} a={spin} Q={charge}: {e:?}"); // or at the noise floor
     }
 
     /// Any f64 in any numeric field: no panic, and an error names one of the input fields.
@@ -69,7 +69,7 @@ proptest! {
         req.elongation_deg = (which == 0).then_some(el);
         match req.evaluate() {
             Ok(r) => {
-                prop_assert!(r.alpha.map_or(true, |a| a.is_finite() && a > 0.0));
+                prop_assert!(r.alpha.map_or(true, |a| a.is_finite() && a > 0.0)); // deflection toward the lens
                 prop_assert!(r.series.iter().all(|s| s.alpha.is_finite()));
                 prop_assert!(r.critical_b.is_finite() && r.ppn.alpha_1pm.is_finite());
                 prop_assert!(serde_json::to_string(&r).is_ok());

@@ -11,10 +11,13 @@
 // mpmath values are pasted with the 20 digits the script prints.
 #![allow(clippy::excessive_precision)]
 
+mod common;
+
 use chiwave_core::encounter::eob::{
     chi_from_w, critical_j, details, estimate, orbit, potential, w_from_chi, Estimate,
 };
-use chiwave_core::numeric::{gauss_legendre, integrate_gl, rel_diff};
+use chiwave_core::numeric::{gauss_legendre, integrate_gl};
+use common::*;
 use chiwave_core::InputError;
 use std::f64::consts::PI;
 
@@ -137,14 +140,14 @@ fn map_reproduces_isotropic_schwarzschild_taylor_coefficients() {
         let t = w_schw_taylor(g);
         for n in 1..=6 {
             // tolerance: χ_n of the sheet carry p^-n cancellations at γ = 1.01 (pitfall 6)
-            let tol = if g < 1.05 { 1e-7 } else { 1e-11 };
+            let tol = if g < 1.05 { 1e-7 } else { 1e-11 }; // γ = 1.01: χ_n carry p∞^-n cancellations (p∞ ≈ 0.14)
             assert!(rel_diff(w[n - 1], t[n]) < tol, "γ={g} n={n}: {} vs {}", w[n - 1], t[n]);
         }
         // closed forms of the first three, derived by hand from the series: w_1 = 2(2γ²−1),
         // w_2 = (3/2)(5γ²−1), w_3 = 9γ² − 1/2
-        assert!(rel_diff(t[1], 2.0 * (2.0 * g * g - 1.0)) < 1e-14);
-        assert!(rel_diff(t[2], 1.5 * (5.0 * g * g - 1.0)) < 1e-14);
-        assert!(rel_diff(t[3], 9.0 * g * g - 0.5) < 1e-14);
+        assert!(rel_diff(t[1], 2.0 * (2.0 * g * g - 1.0)) < REL_FEW_OPS);
+        assert!(rel_diff(t[2], 1.5 * (5.0 * g * g - 1.0)) < REL_FEW_OPS);
+        assert!(rel_diff(t[3], 9.0 * g * g - 0.5) < REL_FEW_OPS);
     }
 }
 
@@ -155,16 +158,16 @@ fn map_low_orders_written_out() {
     // χ_3 = p w3 + w1 w2/(2p) − w1³/(24p³), χ_4 = (3π/8)(p² w4 + w1 w3 + w2²/2).
     let (p, w) = (0.7, [1.3, 2.9, -4.1, 5.3]);
     let c = chi_from_w(p, &w);
-    assert!(rel_diff(c[0], w[0] / (2.0 * p)) < 1e-15);
-    assert!(rel_diff(c[1], PI * w[1] / 4.0) < 1e-15);
+    assert!(rel_diff(c[0], w[0] / (2.0 * p)) < REL_ONE_ROUNDING);
+    assert!(rel_diff(c[1], PI * w[1] / 4.0) < REL_ONE_ROUNDING);
     let c3 = p * w[2] + w[0] * w[1] / (2.0 * p) - w[0].powi(3) / (24.0 * p.powi(3));
-    assert!(rel_diff(c[2], c3) < 1e-14);
+    assert!(rel_diff(c[2], c3) < REL_FEW_OPS);
     let c4 = 3.0 * PI / 8.0 * (p * p * w[3] + w[0] * w[2] + w[1] * w[1] / 2.0);
-    assert!(rel_diff(c[3], c4) < 1e-14);
+    assert!(rel_diff(c[3], c4) < REL_FEW_OPS);
     // and the inverse is an inverse (identity)
     let back = w_from_chi(p, &c);
     for k in 0..4 {
-        assert!(rel_diff(back[k], w[k]) < 1e-13);
+        assert!(rel_diff(back[k], w[k]) < REL_ROUNDING);
     }
 }
 
@@ -190,9 +193,9 @@ fn exact_integral_expands_to_the_pm_series_with_j_minus_4_tail() {
                 dev.push(resid / (2.0 * c4) - 1.0);
             }
             // residual·j⁴ → 2χ_4 with corrections O(1/j): small and halving when j doubles
-            assert!(dev[0].abs() < 0.05, "γ={g} ν={nu} dev={dev:?}");
+            assert!(dev[0].abs() < 0.05, "γ={g} ν={nu} dev={dev:?}"); // the O(1/j) correction at j ≥ 400 γ/p∞ stays below 5%
             let ratio = dev[0] / dev[1];
-            assert!((ratio - 2.0).abs() < 0.2, "γ={g} ν={nu} ratio={ratio} dev={dev:?}");
+            assert!((ratio - 2.0).abs() < 0.2, "γ={g} ν={nu} ratio={ratio} dev={dev:?}"); // an O(1/j) correction halves when j doubles
         }
     }
 }
@@ -216,8 +219,8 @@ fn angle_and_turning_point_match_mpmath() {
     for (g, nu, j, chi_ref, rmin_ref) in refs {
         let (x, rm) = scattered(estimate(g, nu, j, &chi_total(g, nu)).unwrap());
         // 1e-10: the χ_n themselves are evaluated in f64 here (cancellations in Cbar, I(v))
-        assert!(rel_diff(x, chi_ref) < 1e-10, "γ={g} ν={nu} j={j}: {x} vs {chi_ref}");
-        assert!(rel_diff(rm, rmin_ref) < 1e-10, "γ={g} ν={nu} j={j}: {rm} vs {rmin_ref}");
+        assert!(rel_diff(x, chi_ref) < 1e-10, "γ={g} ν={nu} j={j}: {x} vs {chi_ref}"); // the χ_n are evaluated in f64 here (cancellations in C̄, I(v)), line above
+        assert!(rel_diff(rm, rmin_ref) < 1e-10, "γ={g} ν={nu} j={j}: {rm} vs {rmin_ref}"); // as above
     }
     // mpmath script: (3.0, 0.25, 8.0) is captured
     assert!(matches!(estimate(3.0, 0.25, 8.0, &chi_total(3.0, 0.25)).unwrap(), Estimate::Captured { .. }));
@@ -235,9 +238,9 @@ fn critical_j_matches_mpmath() {
     ];
     for (g, nu, jc_ref) in refs {
         let jc = critical_j(g, nu, &chi_total(g, nu)).unwrap();
-        assert!(rel_diff(jc, jc_ref) < 1e-10, "γ={g} ν={nu}: {jc} vs {jc_ref}");
+        assert!(rel_diff(jc, jc_ref) < 1e-10, "γ={g} ν={nu}: {jc} vs {jc_ref}"); // as for the angle: f64 χ_n against 40-digit mpmath
         match estimate(g, nu, 0.999 * jc_ref, &chi_total(g, nu)).unwrap() {
-            Estimate::Captured { j_critical } => assert!(rel_diff(j_critical, jc_ref) < 1e-10),
+            Estimate::Captured { j_critical } => assert!(rel_diff(j_critical, jc_ref) < 1e-10), // as above
             e => panic!("expected capture, got {e:?}"),
         }
     }
@@ -288,7 +291,7 @@ fn schw_exact(g: f64, j: f64) -> f64 {
 fn own_schwarzschild_quadrature_matches_mpmath() {
     // mpmath 1.3, tests/reference/eob_mpmath.py, exact Schwarzschild (γ, j, χ_exact)
     for (g, j, x) in [(1.2, 5.64144, 3.2628479263562742933), (1.5, 10.7331, 1.0026511360991618767)] {
-        assert!(rel_diff(schw_exact(g, j), x) < 1e-9, "γ={g} j={j}");
+        assert!(rel_diff(schw_exact(g, j), x) < 1e-9, "γ={g} j={j}"); // this test's own quadrature (200-point panels) against mpmath
     }
 }
 
@@ -307,11 +310,11 @@ fn test_body_estimate_beats_truncated_pm_series_near_capture() {
     for (g, j, exact, eob_ref) in refs {
         let chi4 = chi_schw(g, 4);
         let (x, _) = scattered(estimate(g, NU0, j, &chi4).unwrap());
-        assert!(rel_diff(x, eob_ref) < 1e-9, "γ={g} j={j}: {x} vs {eob_ref}");
+        assert!(rel_diff(x, eob_ref) < 1e-9, "γ={g} j={j}: {x} vs {eob_ref}"); // f64 χ_n and quadrature against 40-digit mpmath
         let pm = pm_series(&chi4, j);
         let err_eob = (x - exact).abs();
         let err_pm = (pm - exact).abs();
-        assert!(err_eob < 0.5 * err_pm, "γ={g} j={j}: EOB err {err_eob}, PM err {err_pm}");
+        assert!(err_eob < 0.5 * err_pm, "γ={g} j={j}: EOB err {err_eob}, PM err {err_pm}"); // the resummed estimate at least halves the truncation error near capture
         // more coefficients (χ_5, χ_6 of the sheet §1.5) bring the estimate closer still
         let (x6, _) = scattered(estimate(g, NU0, j, &chi_schw(g, 6)).unwrap());
         assert!((x6 - exact).abs() < err_eob, "γ={g} j={j}");
@@ -324,7 +327,7 @@ fn test_body_critical_j_approaches_schwarzschild() {
     for (g, jc_exact) in [(1.2, 5.3727990625999288806), (1.5, 7.1554175279993270285)] {
         let e3 = (critical_j(g, NU0, &chi_schw(g, 3)).unwrap() - jc_exact).abs();
         let e6 = (critical_j(g, NU0, &chi_schw(g, 6)).unwrap() - jc_exact).abs();
-        assert!(e6 < e3 && e6 < 0.05 * jc_exact, "γ={g}: e3={e3} e6={e6}");
+        assert!(e6 < e3 && e6 < 0.05 * jc_exact, "γ={g}: e3={e3} e6={e6}"); // six test-body coefficients bring j_c within 5% of the exact one
     }
 }
 
@@ -352,8 +355,8 @@ fn capture_below_critical_j_and_log_growth_above() {
         // no source): equal steps in ln δ give equal increments
         let d1 = xs[4] - xs[3]; // δ: 1e-4 → 1e-6
         let d2 = xs[5] - xs[4]; // δ: 1e-6 → 1e-8
-        assert!(rel_diff(d1, d2) < 0.02, "γ={g}: {d1} vs {d2}");
-        assert!(xs[5] > 10.0);
+        assert!(rel_diff(d1, d2) < 0.02, "γ={g}: {d1} vs {d2}"); // logarithmic divergence: equal steps in ln δ give equal increments up to O(δ)
+        assert!(xs[5] > 10.0); // at δ = 1e-8 the angle has wound several times
     }
 }
 
@@ -405,7 +408,7 @@ fn continuity_of_the_angle_across_quadrature_regimes() {
         let jh = 0.5 * (lo + hi);
         let (xa, _) = scattered(estimate(g, nu, jh * (1.0 - 1e-13), &chi).unwrap());
         let (xb, _) = scattered(estimate(g, nu, jh * (1.0 + 1e-13), &chi).unwrap());
-        assert!((xa - xb).abs() < 1e-10 * xa, "γ={g}: {xa} vs {xb}");
+        assert!((xa - xb).abs() < 1e-10 * xa, "γ={g}: {xa} vs {xb}"); // the two integrand forms meet at the switch: continuity to their 1e-12 tolerance and rounding
         let mut prev = f64::INFINITY;
         for k in 0..300 {
             let j = jc * (1.0 + 1e-3 * (1.03f64).powi(k));
@@ -428,10 +431,10 @@ fn large_j_agrees_with_pm_series() {
             let (x, rm) = scattered(estimate(g, nu, j, &chi).unwrap());
             let pm = pm_series(&chi, j);
             // difference is the O(1/j⁴) tail: relative size ~ (χ_1-scale/j)³
-            let bound = 1e3 * (chi[0] / j).powi(3) + 1e-14;
+            let bound = 1e3 * (chi[0] / j).powi(3) + 1e-14; // the O(1/j⁴) tail relative to χ ~ χ₁/j, plus rounding
             assert!(rel_diff(x, pm) < bound, "γ={g} j={j}: {x} vs {pm}");
             // turning point → straight line r_min → j/p∞ (Newtonian limit of the orbit)
-            assert!(rel_diff(rm, j / p_inf(g)) < 10.0 * chi[0] / j);
+            assert!(rel_diff(rm, j / p_inf(g)) < 10.0 * chi[0] / j); // r_min = j/p∞ (1 + O(χ_1/j)): the deflection shortens the turning radius
         }
     }
 }
@@ -445,7 +448,7 @@ fn total_chi3_gives_positive_w3_and_conservative_does_not_at_high_energy() {
     for g in [1.001, 1.01, 1.1, 1.5, 2.0, 3.0, 10.0, 100.0, 1e3] {
         for nu in [1e-3, 0.05, 0.1, 0.2, 0.25] {
             let w = potential(g, nu, &chi_total(g, nu)).unwrap().w;
-            assert!(w[0] > 0.0 && w[1] > 0.0 && w[2] > 0.0, "γ={g} ν={nu}: {w:?}");
+            assert!(w[0] > 0.0 && w[1] > 0.0 && w[2] > 0.0, "γ={g} ν={nu}: {w:?}"); // w_n > 0 for the total χ_3 (module docs)
         }
     }
     // conservative only, γ = 10, ν = 1/4: w_3 < 0 (cf. mpmath exploration; χ_3^cons ~ −8γ³ ln 2γ,
@@ -453,7 +456,7 @@ fn total_chi3_gives_positive_w3_and_conservative_does_not_at_high_energy() {
     // scatters at large j.
     let (g, nu) = (10.0, 0.25);
     let cons = vec![chi1(g), chi2(g, nu), chi3_cons(g, nu)];
-    assert!(potential(g, nu, &cons).unwrap().w[2] < 0.0);
+    assert!(potential(g, nu, &cons).unwrap().w[2] < 0.0); // conservative χ_3 at γ = 10 gives w_3 < 0 (module docs)
     assert!(matches!(estimate(g, nu, 5.0, &cons).unwrap(), Estimate::Captured { .. }));
     let jc = critical_j(g, nu, &cons).unwrap();
     assert!(matches!(estimate(g, nu, 0.99 * jc, &cons).unwrap(), Estimate::Captured { .. }));
@@ -473,11 +476,11 @@ fn scattered_orbit_obeys_the_radial_equation() {
         let o = orbit(g, nu, j, &chi, 801).unwrap();
         assert!(!o.captured && o.r.len() == 801 && o.phi.len() == 801);
         let mid = 400;
-        assert!(rel_diff(o.r[mid], rm) < 1e-12);
-        assert!((o.phi[mid] - (PI / 2.0 + x / 2.0)).abs() < 1e-10);
+        assert!(rel_diff(o.r[mid], rm) < REL_QUADRATURE);
+        assert!((o.phi[mid] - (PI / 2.0 + x / 2.0)).abs() < 1e-10); // φ at periapsis: orbit quadrature (16-point steps) against the angle's 1e-12 rule
         // symmetric legs; total sweep from r_far to r_far
-        assert!(rel_diff(o.r[0], o.r[800]) < 1e-14);
-        assert!(((o.phi[0] + o.phi[800]) - (PI + x)).abs() < 1e-10);
+        assert!(rel_diff(o.r[0], o.r[800]) < REL_FEW_OPS);
+        assert!(((o.phi[0] + o.phi[800]) - (PI + x)).abs() < 1e-10); // as for the periapsis angle
         // dφ/du = j/√(p∞² + w − j²u²) checked by central differences along the incoming leg
         // (independent of the quadrature used to build the orbit)
         let w = potential(g, nu, &chi).unwrap().w;
@@ -488,12 +491,12 @@ fn scattered_orbit_obeys_the_radial_equation() {
             let fd = (o.phi[k + 1] - o.phi[k - 1]) / (u_b - u_a);
             let u = 1.0 / o.r[k];
             let exact = j / rad(u).sqrt();
-            assert!(rel_diff(fd, exact) < 1e-3, "k={k}: {fd} vs {exact}");
+            assert!(rel_diff(fd, exact) < 1e-3, "k={k}: {fd} vs {exact}"); // central difference over two steps of the 801-point orbit: O(Δu²) truncation
         }
         // even n works too
         let o2 = orbit(g, nu, j, &chi, 100).unwrap();
         assert_eq!(o2.r.len(), 100);
-        assert!(((o2.phi[0] + o2.phi[99]) - (PI + x)).abs() < 1e-10);
+        assert!(((o2.phi[0] + o2.phi[99]) - (PI + x)).abs() < 1e-10); // as for the periapsis angle
     }
 }
 
@@ -505,9 +508,9 @@ fn captured_orbit_spirals_in_to_r_2() {
     for j in [0.5 * jc, 0.99 * jc, (1.0 - 1e-6) * jc] {
         let o = orbit(g, nu, j, &chi, 300).unwrap();
         assert!(o.captured && o.r.len() == 300);
-        assert!(o.r[0] > 50.0);
+        assert!(o.r[0] > 50.0); // the captured orbit starts at r = 100 (orbit docs)
         let last = *o.r.last().unwrap();
-        assert!(last <= 2.0 + 1e-9, "last r = {last}");
+        assert!(last <= 2.0 + 1e-9, "last r = {last}"); // it stops at r = 2 (CAPTURE_STOP_RADIUS), up to the last step's rounding
         assert!(o.r.windows(2).all(|w| w[1] <= w[0]) && o.phi.windows(2).all(|w| w[1] >= w[0]));
     }
     // closer to j_crit the body whirls longer
@@ -600,10 +603,10 @@ mod props {
             let jc = critical_j(g, nu, &c).unwrap();
             match estimate(g, nu, f * jc, &c).unwrap() {
                 Estimate::Scattered { chi, r_min } => {
-                    prop_assert!(f > 1.0 && chi.is_finite() && chi > 0.0 && r_min > 0.0);
+                    prop_assert!(f > 1.0 && chi.is_finite() && chi > 0.0 && r_min > 0.0); // scattering exactly above the critical j
                 }
                 Estimate::Captured { j_critical } => {
-                    prop_assert!(f < 1.0 && (j_critical - jc).abs() <= 1e-9 * jc);
+                    prop_assert!(f < 1.0 && (j_critical - jc).abs() <= 1e-9 * jc); // the same model's critical j, found again by the capture branch: root polishing only
                 }
             }
         }

@@ -33,8 +33,8 @@ proptest! {
         };
         match r.evaluate() {
             Ok(out) => {
-                prop_assert!(out.einstein_radius_rad.is_finite() && out.einstein_radius_rad > 0.0);
-                prop_assert!(out.total_magnification >= 1.0 && out.time_delay_s.is_finite());
+                prop_assert!(out.einstein_radius_rad.is_finite() && out.einstein_radius_rad > 0.0); // an angle, positive
+                prop_assert!(out.total_magnification >= 1.0 && out.time_delay_s.is_finite()); // a point lens never demagnifies
                 if let Some(a) = out.amplification {
                     prop_assert!(a.re.is_finite() && a.im.is_finite());
                 }
@@ -58,7 +58,7 @@ proptest! {
     fn point_lens_and_curve_never_panic(a in any_f64(), b in any_f64(), n in 0usize..50) {
         if let Ok(l) = PointLens::new(a) {
             let [p, m] = l.magnifications();
-            prop_assert!(p >= 1.0 && m <= 0.0 && (p + m - 1.0).abs() < 1e-12 * p);
+            prop_assert!(p >= 1.0 && m <= 0.0 && (p + m - 1.0).abs() < 1e-12 * p); // μ₊ + μ₋ = 1 to rounding, relative to μ₊ ≤ 1e10
         }
         if let Err(e) = magnification_curve(a, b, n) {
             prop_assert!(["offset_min", "offset_max", "n"].contains(&e.field()));
