@@ -1,0 +1,72 @@
+//! The light-deflection result (JSON keys are the stable CLI contract; fields serialise in the
+//! order written here).
+
+use super::{ppn, strong};
+use crate::validity::Flag;
+use serde::Serialize;
+use std::collections::BTreeMap;
+
+/// One weak-field partial sum.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SeriesTerm {
+    /// Highest order n included.
+    pub order: usize,
+    /// Σ_{k ≤ n} c_k (M/b)^k, radians (first term × (1 + γ)/2).
+    pub alpha: f64,
+    /// (partial sum − exact α)/exact α; `None` when captured.
+    pub rel_error: Option<f64>,
+}
+
+/// SI values, present when the mass has a physical unit (JSON key `physical`).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct LightPhysical {
+    pub mass_kg: f64,
+    pub mass_msun: f64,
+    /// G M/c², metres.
+    pub gm_over_c2_m: f64,
+    pub b_m: f64,
+    pub b_over_m: f64,
+    pub closest_approach_m: Option<f64>,
+    pub critical_b_m: f64,
+    pub alpha_rad: Option<f64>,
+    pub alpha_deg: Option<f64>,
+    pub alpha_arcsec: Option<f64>,
+    pub alpha_mas: Option<f64>,
+    pub alpha_uas: Option<f64>,
+    /// PPN [(1 + γ)/2]·4GM/(c²b) in arcsec.
+    pub ppn_alpha_1pm_arcsec: f64,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub wavelength_m: Option<f64>,
+}
+
+/// Light-deflection result (JSON keys are the CLI contract).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct LightResult {
+    /// `"schwarzschild"`, `"kerr"` or `"reissner-nordstrom"`.
+    pub metric: &'static str,
+    /// Exact deflection, radians, positive toward the lens; `None` when captured.
+    pub alpha: Option<f64>,
+    pub captured: bool,
+    /// b_c/M.
+    pub critical_b: f64,
+    /// r0/M; `None` when captured.
+    pub closest_approach: Option<f64>,
+    /// b/M as used (M the lens mass, G = c = 1).
+    pub b_over_m: f64,
+    /// The former key of `b_over_m` (same value), kept for one release.
+    #[serde(rename = "impact_parameter")]
+    pub impact_parameter_alias: f64,
+    /// Partial sums of the weak-field series, orders 1..=orders.
+    pub series: Vec<SeriesTerm>,
+    /// Bozza's log limit beside the exact value (Schwarzschild, not captured; otherwise null).
+    pub strong_deflection: Option<strong::StrongDeflection>,
+    pub ppn: ppn::Ppn,
+    /// α in arcsec, only with a physical mass.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub alpha_arcsec: Option<f64>,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub physical: Option<LightPhysical>,
+    pub flags: Vec<Flag>,
+    /// Output key → citation of the formula that produced it.
+    pub sources: BTreeMap<&'static str, &'static str>,
+}
