@@ -5,7 +5,8 @@
 //! Cells are drawn in pixel space after the axis ranges are fixed, so the layer works with
 //! the same [`crate::PlotFrame`] as the line figures (hover turns a pixel back into (x, y)).
 
-use crate::{perr, rgb, PlotError, Rgb, FONT};
+use crate::render::{fs, perr, rgb, FONT};
+use crate::{PlotError, Rgb};
 use plotters::prelude::*;
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use serde::{Deserialize, Serialize};
@@ -158,7 +159,7 @@ pub(crate) fn draw_colour_bar<DB: DrawingBackend>(
     }
     root.draw(&Rectangle::new([(left, top), (left + w, top + h)], rgb(crate::palette::AXIS).stroke_width(1))).map_err(perr)?;
     let ink = rgb(crate::palette::INK);
-    let font = (FONT, crate::fs(11.0)).into_font().color(&ink);
+    let font = (FONT, fs(11.0)).into_font().color(&ink);
     let (a, b) = if heat.log { (10f64.powf(lo), 10f64.powf(hi)) } else { (lo, hi) };
     let below = top + h + 3;
     root.draw(&Text::new(short(a), (left, below), font.pos(Pos::new(HPos::Left, VPos::Top)))).map_err(perr)?;
