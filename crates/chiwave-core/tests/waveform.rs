@@ -475,7 +475,7 @@ fn em_request_contract() {
     assert!(j["memory"]["theta"].is_f64() && j["memory"]["phi"].is_f64());
     assert!(j["e_theta"].as_array().unwrap().len() == 11 && j["e_phi"].as_array().unwrap().len() == 11);
     assert!(j["units"].as_str().unwrap().starts_with("Gaussian, c = 1"));
-    assert!(r.sources["e_rad_flux"].starts_with("e_rad_flux:") && r.sources["e_rad_closed"].contains("e_rad_closed"));
+    assert!(r.sources["flux"].starts_with("e_rad_flux:") && r.sources["closed_form"].contains("e_rad_closed"));
     // Bookkeeping: e_rad_flux = body1 + body2 + interference; e_rad_closed = body1 + body2.
     let (flux, x) = (r.e_rad_flux.unwrap(), r.interference.unwrap());
     assert!(rel_diff(flux, r.e_rad_body1 + r.e_rad_body2 + x) < REL_FEW_OPS);

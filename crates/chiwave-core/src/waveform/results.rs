@@ -145,7 +145,7 @@ pub struct GravityWaveformResult {
     #[serde(rename = "b_over_m")]
     pub b_over_m_alias: f64,
     pub flags: Vec<Flag>,
-    /// Output key → source of its formula.
+    /// What a source covers → its citation (keys listed in `sources.rs`).
     pub sources: BTreeMap<&'static str, &'static str>,
     pub physical: Option<GravityWaveformPhysical>,
     pub spectrum: Option<SpectrumResult>,
@@ -245,7 +245,7 @@ pub struct EmWaveformResult {
     /// Units of the outputs, in words.
     pub units: &'static str,
     pub flags: Vec<Flag>,
-    /// Output key → source of its formula.
+    /// What a source covers → its citation (keys listed in `sources.rs`).
     pub sources: BTreeMap<&'static str, &'static str>,
     pub spectrum: Option<EmSpectrumResult>,
     pub physical: Option<EmWaveformPhysical>,

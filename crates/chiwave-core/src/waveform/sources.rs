@@ -1,5 +1,5 @@
-//! The source of every waveform output key (`sources` in the result: output key → citation),
-//! for the gravitational and the electromagnetic result.
+//! The sources of the waveform results (`sources`: a keyed map, each key naming what its
+//! citation covers, listed below), for the gravitational and the electromagnetic result.
 
 use std::collections::BTreeMap;
 
@@ -10,21 +10,18 @@ const MEMORY: &str = "Memory: Braginsky & Thorne 1987, Nature 327, 123, with the
 const ZFL: &str = "Zero-frequency limit: Smarr 1977, PRD 15, 2069; closed form of Di Vecchia, Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (recalled; the prefactor 2GQ²/π fixed by the numerical zero-frequency limit of the waveform)";
 const ANTENNA: &str = "Antenna pattern: Thorne 1987, 300 Years of Gravitation, ch. 9 (common practice)";
 
-/// Output key → citation, gravitational waveform.
+/// Source → citation, gravitational waveform. The keys name what each source covers: `waveform`
+/// (h_plus, h_cross, peak_abs_h, memory, constant_piece), `flux` (e_rad_flux, p_rad_flux),
+/// `closed_form` (e_rad_closed, p_rad_closed), `memory` (memory_braginsky_thorne),
+/// `zero_frequency` (the spectrum's ω → 0 limits), `antenna` (detector).
 pub(crate) fn gravity() -> BTreeMap<&'static str, &'static str> {
     BTreeMap::from([
-        ("h_plus", LO_WAVEFORM),
-        ("h_cross", LO_WAVEFORM),
-        ("peak_abs_h", LO_WAVEFORM),
-        ("memory", LO_WAVEFORM),
-        ("constant_piece", LO_WAVEFORM),
-        ("e_rad_flux", FLUX),
-        ("p_rad_flux", FLUX),
-        ("e_rad_closed", CLOSED),
-        ("p_rad_closed", CLOSED),
-        ("memory_braginsky_thorne", MEMORY),
-        ("spectrum", ZFL),
-        ("detector", ANTENNA),
+        ("waveform", LO_WAVEFORM),
+        ("flux", FLUX),
+        ("closed_form", CLOSED),
+        ("memory", MEMORY),
+        ("zero_frequency", ZFL),
+        ("antenna", ANTENNA),
     ])
 }
 
@@ -34,17 +31,14 @@ const EM_FLUX: &str = "e_rad_flux: flux integral of D²|E|²/(4π) over u and th
 const EM_MEMORY: &str = "memory: ∫du D E = −D ΔA_⊥ with D A = Σ q v/(1 − n·v) and the LO impulse 2 q1 q2/(v b); zfl_direction: classical soft-photon limit";
 const EM_SPECTRUM: &str = "spectrum: closed-form Bessel K0/K1 spectrum (Fourier transform of the Coulomb profiles, Gradshteyn & Ryzhik 3.754.2, recalled)";
 
-/// Output key → citation, electromagnetic waveform.
+/// Source → citation, electromagnetic waveform: `field` (e_theta, e_phi), `closed_form`
+/// (e_rad_body1, e_rad_body2, e_rad_closed), `flux` (e_rad_flux, interference, p_rad_flux),
+/// `memory` (memory, impulse), `spectrum`.
 pub(crate) fn electromagnetic() -> BTreeMap<&'static str, &'static str> {
     BTreeMap::from([
-        ("e_theta", EM_FIELD),
-        ("e_phi", EM_FIELD),
-        ("e_rad_body1", EM_CLOSED),
-        ("e_rad_body2", EM_CLOSED),
-        ("e_rad_closed", EM_CLOSED),
-        ("e_rad_flux", EM_FLUX),
-        ("interference", EM_FLUX),
-        ("p_rad_flux", EM_FLUX),
+        ("field", EM_FIELD),
+        ("closed_form", EM_CLOSED),
+        ("flux", EM_FLUX),
         ("memory", EM_MEMORY),
         ("spectrum", EM_SPECTRUM),
     ])
