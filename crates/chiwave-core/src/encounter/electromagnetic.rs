@@ -38,18 +38,7 @@ pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
     let t3 = -k.p_cm * (terms[2] + terms[3] - terms[0].powi(3) / 6.0);
     let kk = (t1 * t1 + 2.0 * t1 * t2) / (2.0 * k.m1 * k.m2 * b.p_inf * b.p_inf);
     let cov = impulse::Covariant { c_b: t1 + t2 + t3, c_u1: -kk * (b.gamma * k.m1 + k.m2), c_u2: kk * (b.gamma * k.m2 + k.m1) };
-    let inp = impulse::ImpulseInput {
-        m1: k.m1,
-        m2: k.m2,
-        gamma: b.gamma,
-        p_inf: b.p_inf,
-        p_cm: k.p_cm,
-        h: k.h,
-        b: k.b_over_gm,
-        j: k.j,
-        chi: [0.0; 4],
-        eps_rad: 0.0,
-    };
+    let inp = impulse::ImpulseInput::new(k, [0.0; 4], 0.0);
     let imp = impulse::frames(&cov, &inp);
     let orders = order_rows(&["1PL", "2PL", "3PL conservative (test charge)", "3PL radiation reaction"], &terms);
     let mut flags = flags::electromagnetic(k, kappa, fall);

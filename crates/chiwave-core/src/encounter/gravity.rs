@@ -44,18 +44,7 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
     let p_rad_cm = radiated::p_rad_cm(b, k.m1, k.m2, k.p_cm, k.b_over_gm);
     let j_rad = radiated::j_rad_over_j(b, k.nu, k.h, k.j);
     // Impulse.
-    let inp = impulse::ImpulseInput {
-        m1: k.m1,
-        m2: k.m2,
-        gamma: b.gamma,
-        p_inf: b.p_inf,
-        p_cm: k.p_cm,
-        h: k.h,
-        b: k.b_over_gm,
-        j: k.j,
-        chi: c,
-        eps_rad: k.nu * k.nu * e_function / k.b_over_gm.powi(3),
-    };
+    let inp = impulse::ImpulseInput::new(k, c, k.nu * k.nu * e_function / k.b_over_gm.powi(3));
     let cov = impulse::covariant(&inp);
     let imp = impulse::frames(&cov.total, &inp);
     let imp_c = impulse::frames(&cov.conservative, &inp);

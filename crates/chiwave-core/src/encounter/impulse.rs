@@ -65,6 +65,14 @@ pub struct ImpulseInput {
     pub eps_rad: f64,
 }
 
+impl ImpulseInput {
+    /// The inputs for the kinematics `k`, the angle coefficients `chi` and the radiated `eps_rad`.
+    pub fn new(k: &crate::two_body::Kinematics, chi: [f64; 4], eps_rad: f64) -> Self {
+        let s = &k.speed;
+        ImpulseInput { m1: k.m1, m2: k.m2, gamma: s.gamma, p_inf: s.p_inf, p_cm: k.p_cm, h: k.h, b: k.b_over_gm, j: k.j, chi, eps_rad }
+    }
+}
+
 /// Covariant impulse coefficients through O(G³).
 ///
 /// # Formula
