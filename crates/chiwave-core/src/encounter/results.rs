@@ -77,7 +77,7 @@ pub(crate) fn order_rows(labels: &[&'static str], terms: &[f64]) -> Vec<OrderRow
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct TestBodyTerm {
     pub order: usize,
-    /// χ_n^Schw of χ/2 = Σ χ_n/jⁿ (generated in code, [`testbody::pm_coefficient`]).
+    /// χ_n^Schw of χ/2 = Σ χ_n/jⁿ (generated in code, [`super::testbody::pm_coefficient`]).
     pub coefficient: f64,
     /// 2 Σ_{k≤n} χ_k^Schw/j^k (radians).
     pub cumulative: f64,

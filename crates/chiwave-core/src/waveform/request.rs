@@ -159,8 +159,8 @@ pub struct GravitySystem {
 }
 
 impl WaveformRequest {
-    /// Evaluates the request: the gravitational waveform ([`GravityWaveformResult`]) or, with
-    /// `force = "em"`, the electromagnetic one ([`EmWaveformResult`], frame A only).
+    /// Evaluates the request: the gravitational waveform ([`GravityWaveformResult`](super::GravityWaveformResult)) or, with
+    /// `force = "em"`, the electromagnetic one ([`EmWaveformResult`](super::EmWaveformResult), frame A only).
     ///
     /// # Errors
     /// [`InputError`] naming the offending field and its allowed range: for example charges

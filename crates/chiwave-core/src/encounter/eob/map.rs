@@ -114,7 +114,7 @@ fn chi_n_of_w(p: f64, w: &[f64], n: usize, include_top: bool) -> f64 {
 ///
 /// # Domain
 /// p∞ > 0. At small p∞ the p∞^(−3) terms of χ_3 and w_1³/(24p∞³) cancel: w_3 loses about
-/// 3 log10(1/p∞) digits; [`details`] flags p∞ < 1e-3.
+/// 3 log10(1/p∞) digits; [`details`](super::details) flags p∞ < 1e-3.
 ///
 /// # Examples
 /// ```

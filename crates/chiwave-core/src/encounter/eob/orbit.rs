@@ -12,16 +12,16 @@ use std::f64::consts::FRAC_PI_2;
 /// # Formula
 /// dφ/du = j/√(p∞² + w(u) − j²u²), u = 1/r (Damour 2018, arXiv:1710.10599). Scattering:
 /// incoming leg from r_far = max(100, 20 r_min) to periapsis (φ = π/2 + χ/2), outgoing leg by
-/// reflection φ → π + χ − φ; the parametrisations of [`estimate`] are used (θ far from capture,
+/// reflection φ → π + χ − φ; the parametrisations of [`estimate`](super::estimate) are used (θ far from capture,
 /// t near capture), with 16-point Gauss–Legendre per step. Capture: from r = 100 inward to
 /// r = 2 (or just outside a turning point, or past the barrier top if that is inside r = 2),
 /// adaptive Gauss–Legendre per step, points spread evenly in √(Δφ² + (Δ ln r)²).
 ///
 /// # Domain
-/// As [`estimate`]; 4 ≤ n ≤ 20000 points.
+/// As [`estimate`](super::estimate); 4 ≤ n ≤ 20000 points.
 ///
 /// # Errors
-/// As [`estimate`]; `n` out of range.
+/// As [`estimate`](super::estimate); `n` out of range.
 ///
 /// # Examples
 /// ```

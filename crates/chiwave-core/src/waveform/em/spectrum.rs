@@ -46,7 +46,7 @@ fn spectrum_parts(sys: &EmSystem, d: &Dir, omega: f64) -> [[Complex64; 2]; 2] {
 /// NaN entries give NaN.
 ///
 /// # Limits
-/// ω → 0: the soft-photon value |D ΔA_⊥|²/(4π²) (see [`memory`]). ω → ∞: exponential decay,
+/// ω → 0: the soft-photon value |D ΔA_⊥|²/(4π²) (see [`memory`](super::memory)). ω → ∞: exponential decay,
 /// like e^{−2 ω (1 − n_x v) b/v} for body 1 and e^{−2 ω b/(γ v)} for body 2.
 ///
 /// # Examples
@@ -104,7 +104,7 @@ const N_ALPHA: usize = 24;
 /// # Formula
 /// dE/dω = ∫dΩ |E~(ω)|²/(4π²) with [`spectrum`]'s E~; ∫_0^∞ dω of it is
 /// `energies(sys).total_flux`. Body 1's own part |E~1|² uses a rule clustered on the forward
-/// cone (48 × 24 nodes); body 2's part and the interference use the band rule of [`energies`],
+/// cone (48 × 24 nodes); body 2's part and the interference use the band rule of [`energies`](super::energies),
 /// refined with ω (up to 320 × 320 nodes) to follow the interference phase e^{−iω n_y b}.
 ///
 /// # Accuracy

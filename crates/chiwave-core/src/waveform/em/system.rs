@@ -9,7 +9,7 @@ use std::f64::consts::{FRAC_PI_4, PI};
 /// Largest relative Lorentz factor accepted by [`EmSystem::new`].
 ///
 /// Above it the forward beaming cone (angle ~1/γ) and the forward pulse (duration ~b/(γ² v))
-/// need more sphere nodes than the fixed rules of [`energies`] and [`spectrum_integrated`]
+/// need more sphere nodes than the fixed rules of [`energies`](super::energies) and [`spectrum_integrated`](super::spectrum_integrated)
 /// use; the accuracy of those rules is tested up to this value.
 pub const GAMMA_MAX: f64 = 1.0e3;
 
