@@ -1,4 +1,4 @@
-//! The waveform view's progressive sky work (the page's "Radiation" view): a handle on the core's
+//! The waveform view's progressive sky work: a handle on the core's
 //! [`chiwave_core::waveform::WaveformJob`] (energy balance, sky map, dE/dω over the sphere) that
 //! the page advances for a few milliseconds per animation frame, and the two figures drawn from
 //! its partial state. No physics here: the sums are the core's, the figures the plot crate's.

@@ -151,7 +151,8 @@ impl LightRequest {
     /// req.mass = Some("1Msun".into());
     /// req.b = "6.957e8m".into();
     /// let r = req.evaluate().unwrap();
-    /// // Deflection sheet §3: exact GR at b = R_sun (IAU 2015 nominal) is 1.75120127283584 arcsec.
+    /// // Exact GR at b = R☉ (IAU 2015 nominal; Darwin 1959 closed form, mpmath 1.3 in
+    /// // tests/reference/deflection_mpmath.py) is 1.75120127283584 arcsec.
     /// assert!((r.alpha_arcsec.unwrap() - 1.751_201_272_835_84).abs() < 1e-12);
     /// // IAU 2015 nominal: 4GM/(c²R) = 1.75119032555998 arcsec (the series' first term).
     /// let first = r.physical.unwrap().ppn_alpha_1pm_arcsec;

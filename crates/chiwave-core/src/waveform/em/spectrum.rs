@@ -16,7 +16,7 @@ fn spectrum_parts(sys: &EmSystem, d: &Dir, omega: f64) -> [[Complex64; 2]; 2] {
     let b = sys.b;
     let k1 = omega * d.kappa * b / v;
     let k2 = omega * b / (g * v);
-    // Sheet §2: a~1 = (q1 q2/(m1 v b)) (2 i k1 K0(k1)/γ³, 2 k1 K1(k1)/γ, 0),
+    // Our derivation (module docs): a~1 = (q1 q2/(m1 v b)) (2 i k1 K0(k1)/γ³, 2 k1 K1(k1)/γ, 0),
     //           a~2 = −(q1 q2/(m2 v b)) (2 i k2 K0(k2)/γ, 2 k2 K1(k2), 0).
     let s1 = sys.k1() / (v * b);
     let s2 = sys.k2() / (v * b);
