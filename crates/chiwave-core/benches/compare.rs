@@ -2,7 +2,9 @@
 //! `scripts/bench.sh`: the same points as the Python peers (`benches/peers/`) and the same
 //! requests as the in-browser timing (`tests/e2e/bench-json.mjs`).
 //!
-//! `cargo bench -p chiwave-core --bench compare` times them (criterion, group `compare`);
+//! `cargo bench -p chiwave-core --bench compare` times them (criterion, group `compare`; the
+//! `*_json` variants also read the request from a JSON string and write the result as one, the
+//! native analogue of the conversions a wasm call pays);
 //! `cargo bench -p chiwave-core --bench compare -- --values` instead prints chiwave's results for
 //! every workload as one JSON object (the peers check theirs against it) and times nothing.
 use chiwave_core::deflection::{sweep, LightRequest};
@@ -166,6 +168,16 @@ fn bench(c: &mut Criterion, all: &Value) {
     let req = light_request(ls);
     let (b_min, b_max, n) = (num(ls, "b_min"), num(ls, "b_max"), ls["n"].as_u64().expect("n") as usize);
     g.bench_function("light_sweep", |b| b.iter(|| sweep(black_box(&req), b_min, b_max, n)));
+    // With the request read from JSON and the result written as JSON: the native analogue of the
+    // conversions a wasm call pays at the boundary.
+    let req_json = ls["request"].to_string();
+    g.bench_function("light_sweep_json", |b| {
+        b.iter(|| {
+            let r: Request = serde_json::from_str(black_box(&req_json)).expect("request");
+            let Request::Light(r) = r else { panic!("light request") };
+            serde_json::to_string(&sweep(&r, b_min, b_max, n).expect("sweep")).expect("JSON")
+        })
+    });
 
     let boosted: Vec<(Boost, f64, f64)> = pm_points(&all["pm_angles"])
         .into_iter()
@@ -195,6 +207,13 @@ fn bench(c: &mut Criterion, all: &Value) {
     for name in ["encounter", "waveform", "waveform_balance"] {
         let r: Request = serde_json::from_value(wn[name].clone()).expect("request");
         g.bench_function(format!("request_{name}"), |b| b.iter(|| evaluate(black_box(&r)).expect("evaluates")));
+        let text = wn[name].to_string();
+        g.bench_function(format!("request_{name}_json"), |b| {
+            b.iter(|| {
+                let r: Request = serde_json::from_str(black_box(&text)).expect("request");
+                serde_json::to_string(&evaluate(&r).expect("evaluates")).expect("JSON")
+            })
+        });
     }
     g.finish();
 }
