@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Runs every benchmark in one session and writes bench/report.md and bench/report.json:
 #   1. the native criterion benches of chiwave-core (every crates/chiwave-core/benches/*.rs, one
-#      after another, with short warm-up and measurement times);
+#      after another, with short warm-up and measurement times; `compare`, the native side of the
+#      peer and wasm comparisons, last, right before the peers);
 #   2. the in-browser timing (tests/e2e/bench-json.mjs: tests/e2e/bench.mjs's figures, the wasm
 #      workloads of benches/workloads.json, interaction to next paint per view, start-up);
 #   3. the Python peers (benches/peers/*.py: numpy/scipy/mpmath on the same workloads, each checked
@@ -78,13 +79,18 @@ json.dump(m, open(sys.argv[1], "w"), indent=1)
 EOF
 
 # --- 1. native ----------------------------------------------------------------------------------
+# The `compare` bench (the native side of the peer and wasm comparisons) runs last, right before
+# the peers, so that both sides of each ratio are measured close together in time.
 benches=${BENCH_ONLY:-$(ls crates/chiwave-core/benches/*.rs | xargs -n1 basename | sed 's/\.rs$//' | tr '\n' ' ')}
+native() {
+  say "native: $1 (warm-up ${warmup} s, measurement ${measure} s per benchmark)"
+  cargo bench -q -p chiwave-core --bench "$1" -- --warm-up-time "$warmup" --measurement-time "$measure" \
+    >"$work/native-$1.log" 2>&1 || { tail -20 "$work/native-$1.log"; exit 1; }
+}
 say "building the native benches"
 cargo bench -p chiwave-core --no-run >"$work/build-native.log" 2>&1 || { tail -20 "$work/build-native.log"; exit 1; }
 for b in $benches; do
-  say "native: $b (warm-up ${warmup} s, measurement ${measure} s per benchmark)"
-  cargo bench -q -p chiwave-core --bench "$b" -- --warm-up-time "$warmup" --measurement-time "$measure" \
-    >"$work/native-$b.log" 2>&1 || { tail -20 "$work/native-$b.log"; exit 1; }
+  [ "$b" = compare ] || native "$b"
 done
 
 # --- 2. browser ---------------------------------------------------------------------------------
@@ -96,6 +102,7 @@ if [ "$browser" = 1 ]; then
 fi
 
 # --- 3. peers -----------------------------------------------------------------------------------
+case " $benches " in *" compare "*) native compare ;; esac
 say "chiwave's values for the peers' checks"
 cargo bench -q -p chiwave-core --bench compare -- --values >"$work/values.json" 2>"$work/values.err" \
   || { tail -20 "$work/values.err"; exit 1; }

@@ -197,8 +197,8 @@ fn bench(c: &mut Criterion, all: &Value) {
     let (g_sys, g_omega) = (binary(gw), grid(&gw["omega"]));
     g.bench_function("gravity_spectrum", |b| b.iter(|| gravity_spectrum(black_box(&g_sys), gw, black_box(&g_omega))));
 
-    // The slow ones: flat sampling, few samples.
-    g.sampling_mode(SamplingMode::Flat).sample_size(10);
+    // The slow ones (tens of ms per call): flat sampling, 20 samples.
+    g.sampling_mode(SamplingMode::Flat).sample_size(20);
     let sb = &all["sky_balance"];
     let (sky_sys, opts) = (binary(sb), sky_options(sb));
     g.bench_function("sky_balance", |b| b.iter(|| sky_energy(black_box(&sky_sys), opts)));
