@@ -242,6 +242,9 @@ def markdown(r):
       "benchmark `compare/<workload>` on the same points. **Ratio = peer time / chiwave time for the same items**, "
       "i.e. how many times more items per second chiwave evaluates.")
     w("")
+    w("On this shared 2-core machine the ratios move by up to about ±50 % from one run to the next (other jobs "
+      "compete for the cores); the best figures are the steadier ones.")
+    w("")
     w("| workload | peer | items | chiwave per item | peer per item | ratio (best) | ratio (median) | agreement (max rel. diff ≤ tol.) |")
     w("|---|---|---:|---:|---:|---:|---:|---|")
     for p in r["peers"]:
@@ -257,8 +260,8 @@ def markdown(r):
     for p in r["peers"]:
         extra = ""
         if p.get("throughput_ratio_wasm_best"):
-            extra = (f" chiwave in the browser (wasm, `light_sweep` export) takes {fmt_ms(p['chiwave_wasm_best_ms'])} for the same "
-                     f"sweep: the scipy peer is {p['throughput_ratio_wasm_best']:.2f}× the wasm time.")
+            extra = (f" In the browser chiwave (wasm, `light_sweep` export, result converted to JS objects) takes "
+                     f"{fmt_ms(p['chiwave_wasm_best_ms'])} for the same sweep, {1 / p['throughput_ratio_wasm_best']:.1f}× the peer's time.")
         w(f"- **{p['workload']} / {p['peer']}**: {p['items']} × {p['item']}; chiwave {fmt_ms(p['chiwave_best_ms'])} best / "
           f"{fmt_ms(p['chiwave_median_ms'])} median for all of them, peer {fmt_ms(p['peer_best_ms'])} / {fmt_ms(p['peer_median_ms'])} "
           f"({p['peer_runs']} runs). Peer: {p['note']}.{extra}")

@@ -65,7 +65,7 @@ with open("/proc/cpuinfo") as f:
         if line.startswith("model name"):
             cpu = line.split(":", 1)[1].strip(); break
 import numpy, scipy, mpmath
-dirty = bool(run("git", "status", "--porcelain"))
+dirty = bool(run("git", "status", "--porcelain", "--untracked-files=no"))
 m = {
     "date": datetime.datetime.now(datetime.timezone.utc).strftime("%Y-%m-%d %H:%M UTC"),
     "started_epoch": float(sys.argv[2]),
