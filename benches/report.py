@@ -226,11 +226,11 @@ def markdown(r):
         w(f"| {label} | {m.get(k, '—')} |")
     w("")
     try:
-        busy = float(str(m.get("load_before", "0")).split()[0]) > float(m.get("nproc", 1))
+        busy = max(float(str(m.get(k) or "0").split()[0]) for k in ("load_before", "load_after")) > float(m.get("nproc", 1))
     except ValueError:
         busy = False
     if busy:
-        w("**The machine was shared and busy during this run** (load average above the core count): "
+        w("**The machine was shared and busy during this run** (1-minute load average above the core count before or after): "
           "expect the medians to be inflated; the best figures are the more stable ones.")
         w("")
 
