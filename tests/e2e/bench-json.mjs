@@ -16,7 +16,12 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { execFileSync } from 'node:child_process';
-import { launch, pageUrl, repo } from './browser.mjs';
+import { fileURLToPath } from 'node:url';
+
+// The shared launcher (launch, pageUrl, repo): support.mjs, or browser.mjs in older trees.
+const here = path.dirname(fileURLToPath(import.meta.url));
+const helper = ['support.mjs', 'browser.mjs'].find((f) => fs.existsSync(path.join(here, f)));
+const { launch, pageUrl, repo } = await import(`./${helper}`);
 
 const workloads = JSON.parse(fs.readFileSync(path.join(repo, 'benches', 'workloads.json'), 'utf8'));
 
@@ -40,10 +45,11 @@ function pageBench() {
     parsed: {
       wasm_waveform_2000_best_ms: num(/waveform 2000 samples:.*best ([\d.]+) ms/),
       wasm_waveform_2000_median_ms: num(/waveform 2000 samples:.*median ([\d.]+) ms/),
-      radiation_recompute_median_ms: num(/radiation view recompute:\s+median ([\d.]+) ms/),
-      radiation_sky_total_ms: num(/radiation sky work.*: ([\d.]+) ms in/),
-      radiation_sky_steps: num(/radiation sky work.* in (\d+) steps/),
-      radiation_sky_longest_step_ms: num(/longest step ([\d.]+) ms/),
+      // The view with the progressive sky work is called "radiation" or "waveform".
+      sky_view_recompute_median_ms: num(/(?:radiation|waveform) view recompute:\s+median ([\d.]+) ms/),
+      sky_work_total_ms: num(/(?:radiation|waveform) sky work.*: ([\d.]+) ms in/),
+      sky_work_steps: num(/(?:radiation|waveform) sky work.* in (\d+) steps/),
+      sky_work_longest_step_ms: num(/longest step ([\d.]+) ms/),
       wasm_sweep_1000_best_ms: num(/wasm sweep 1000 points:.*best ([\d.]+) ms/),
       wasm_sweep_1000_median_ms: num(/wasm sweep 1000 points:.*median ([\d.]+) ms/),
       light_recompute_median_ms: num(/light view recompute \+ redraw:\s+median ([\d.]+) ms/),
