@@ -7,6 +7,7 @@
 //! - [`lensing`]: point-mass lens images, magnifications, time delay; wave-optics amplification.
 //! - [`encounter`]: two-body scattering angle, impulse, radiated energy and angular momentum.
 //! - [`waveform`]: leading-order gravitational and electromagnetic waveforms, memory, spectra.
+//! - [`detection`]: detector noise curves, signal-to-noise ratio, horizon distance.
 //! - [`validity`]: regime flags attached to every result.
 //! - [`request`]: the serde request types that the page and the CLI both send.
 //!
@@ -15,6 +16,7 @@
 #![forbid(unsafe_code)]
 
 pub mod deflection;
+pub mod detection;
 pub mod encounter;
 pub mod error;
 pub mod lensing;
