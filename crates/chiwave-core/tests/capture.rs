@@ -5,6 +5,11 @@
 //! v^{10/7}; the O(G³) post-Minkowskian limit at large b; mpmath values of the relativistic b_max
 //! (tests/reference/capture_mpmath.py).
 
+// Reference values are quoted with every digit the mpmath scripts printed.
+#![allow(clippy::excessive_precision)]
+// Index loops over tensor and FFT indices are clearer than iterator chains here.
+#![allow(clippy::needless_range_loop)]
+
 use chiwave_core::encounter::capture::*;
 use chiwave_core::encounter::kinematics::Boost;
 use chiwave_core::encounter::radiated::e_function;

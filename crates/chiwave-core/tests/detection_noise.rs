@@ -4,6 +4,9 @@
 //! matters); the CSV reader's errors; a table sampled from a fit reproduces the fit to the
 //! accuracy expected of log–log interpolation.
 
+// Reference values are quoted with every digit the mpmath scripts printed.
+#![allow(clippy::excessive_precision)]
+
 use chiwave_core::detection::noise::{lisa_confusion_psd, lisa_transfer_frequency, LISA_ARM_M};
 use chiwave_core::detection::{LisaObservation, NoiseCurve, NoiseTable, NoiseValidity, Response};
 use chiwave_core::numeric::rel_diff;

@@ -4,6 +4,9 @@
 //! orientation against a search over polarisation angles; the sky average against a grid average of
 //! the antenna pattern; a table sampled from a fit against the fit.
 
+// Index loops over FFT bins are clearer than iterator chains here.
+#![allow(clippy::needless_range_loop)]
+
 use chiwave_core::detection::*;
 use chiwave_core::numeric::{gauss_legendre, rel_diff};
 use chiwave_core::units::{astro::MPC, codata2018::C, SUN_LENGTH_M};

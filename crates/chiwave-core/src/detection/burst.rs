@@ -16,6 +16,9 @@
 //! (|h̃₊|², |h̃×|², Re h̃₊h̃×*) is the same in both. The common phase e^{iωs} is dropped for the
 //! same reason. See `docs/physics/detection.md`.
 
+// `!(f > 0.0)` is deliberate: unlike `f <= 0.0` it also catches NaN.
+#![allow(clippy::neg_cmp_op_on_partial_ord)]
+
 use crate::error::{positive, InputError};
 use crate::units::codata2018::C;
 use crate::waveform::{Binary, DirectionWaveform, Frame};

@@ -115,16 +115,20 @@ impl LisaObservation {
     /// [`InputError::OutOfRange`] naming `t_obs` for any other value.
     pub fn from_years(t: f64) -> Result<Self, InputError> {
         finite("t_obs", t)?;
-        match t {
-            x if x == 0.5 => Ok(LisaObservation::HalfYear),
-            x if x == 1.0 => Ok(LisaObservation::OneYear),
-            x if x == 2.0 => Ok(LisaObservation::TwoYears),
-            x if x == 4.0 => Ok(LisaObservation::FourYears),
-            _ => Err(InputError::OutOfRange {
+        if t == 0.5 {
+            Ok(LisaObservation::HalfYear)
+        } else if t == 1.0 {
+            Ok(LisaObservation::OneYear)
+        } else if t == 2.0 {
+            Ok(LisaObservation::TwoYears)
+        } else if t == 4.0 {
+            Ok(LisaObservation::FourYears)
+        } else {
+            Err(InputError::OutOfRange {
                 field: "t_obs",
                 value: t,
                 allowed: "0.5, 1, 2 or 4 years (the observation times Robson, Cornish & Liu 2019 tabulate for the galactic confusion noise)".into(),
-            }),
+            })
         }
     }
 

@@ -130,8 +130,8 @@ pub(crate) fn integrate<const N: usize>(
         if converged || segs.len() >= max_intervals {
             let mut value = [0.0; N];
             for s in &segs {
-                for j in 0..N {
-                    value[j] += s.value[j];
+                for (v, x) in value.iter_mut().zip(&s.value) {
+                    *v += x;
                 }
             }
             segs.sort_by(|x, y| x.a.total_cmp(&y.a));

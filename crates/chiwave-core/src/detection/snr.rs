@@ -26,6 +26,9 @@
 //!
 //! Conventions and the low-frequency (memory) split: `docs/physics/detection.md`.
 
+// `!(x > 0.0)` is deliberate: unlike `x <= 0.0` it also catches NaN.
+#![allow(clippy::neg_cmp_op_on_partial_ord)]
+
 use super::burst::Burst;
 use super::noise::{NoiseCurve, NoiseValidity, Response, LISA_F_VALID};
 use super::quadrature::integrate;
@@ -255,8 +258,8 @@ pub fn snr(burst: &Burst, noise: &NoiseCurve, opts: &SnrOptions) -> Result<SnrRe
     let f_lo = band_lo;
     let f_hi = band_hi.min(burst.cutoff_frequency_hz().max(2.0 * band_lo));
     let (y_lo, y_hi) = (f_lo.ln(), f_hi.ln());
-    // Break points: every half decade, the split, and where the curve stops being extrapolated.
-    let step = 0.5 * std::f64::consts::LN_10;
+    // Break points: every decade, the split, and where the curve stops being extrapolated.
+    let step = std::f64::consts::LN_10;
     let n = ((y_hi - y_lo) / step).ceil().max(1.0) as usize;
     let mut breaks: Vec<f64> = (0..=n).map(|i| y_lo + (y_hi - y_lo) * i as f64 / n as f64).collect();
     let y_valid = if matches!(noise, NoiseCurve::Lisa { .. }) { LISA_F_VALID.ln() } else { y_lo };
@@ -296,8 +299,8 @@ pub fn snr(burst: &Burst, noise: &NoiseCurve, opts: &SnrOptions) -> Result<SnrRe
     let y_split = f_split.ln();
     for s in &q.segments {
         if s.b <= y_split + 1e-12 {
-            for j in 0..4 {
-                low[j] += s.value[j];
+            for (l, v) in low.iter_mut().zip(&s.value) {
+                *l += v;
             }
         }
         if s.b <= y_valid + 1e-12 && noise.validity(s.a.exp()) == NoiseValidity::Extrapolated {
@@ -332,7 +335,8 @@ pub fn snr(burst: &Burst, noise: &NoiseCurve, opts: &SnrOptions) -> Result<SnrRe
                     f1 = integrand(x1)[3];
                 }
                 evaluations += 1;
-                if b - a < 1e-7 {
+                // f_peak to 1e-4 relative: the integrand is flat at its peak, nothing finer is meaningful.
+                if b - a < 1e-4 {
                     break;
                 }
             }
