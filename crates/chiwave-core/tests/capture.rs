@@ -242,6 +242,8 @@ fn physical_values_and_flags() {
     let c = capture(10.0, 10.0, &boost, 1e4, Some(l)).unwrap();
     let p = c.physical.unwrap();
     assert!(rel_diff(p.cross_section_m2, PI * (c.b_max_relativistic_gm * l).powi(2)) < 1e-15);
+    assert_eq!(c.cross_section_m2, Some(p.cross_section_m2));
+    assert_eq!(capture(10.0, 10.0, &boost, 1e4, None).unwrap().cross_section_m2, None);
     assert!(rel_diff(p.rate_coefficient_m3_s, p.cross_section_m2 * 1e5) < 1e-12);
     assert!(rel_diff(c.rate_coefficient_gm2_c, c.cross_section_gm2 * v) < 1e-15);
     assert!(rel_diff(p.b_max_newtonian_m, c.b_max_newtonian_gm * l) < 1e-15);

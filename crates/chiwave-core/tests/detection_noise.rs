@@ -166,6 +166,13 @@ fn refusal_outside_the_band() {
     assert_eq!(lisa(None).validity(5e-5), NoiseValidity::Extrapolated);
     assert_eq!(lisa(None).validity(1e-3), NoiseValidity::Valid);
     assert_eq!(lisa(None).validity(1e-6), NoiseValidity::Outside);
+    // The one-frequency summary the CLI prints.
+    let p = aligo().point(100.0).unwrap();
+    assert!(p.valid && p.validity == NoiseValidity::Valid && rel_diff(p.asd * p.asd, p.psd) < 1e-15);
+    assert_eq!((p.noise.as_str(), p.band_hz), ("aligo", (10.0, 1e4)));
+    let q = lisa(Some(1.0)).point(5e-5).unwrap();
+    assert!(!q.valid && q.validity == NoiseValidity::Extrapolated && q.noise == "lisa-1yr");
+    assert_eq!(lisa(None).point(3.0).unwrap_err().field(), "frequency");
 }
 
 #[test]

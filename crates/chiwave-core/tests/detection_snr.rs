@@ -353,6 +353,13 @@ fn cautions_and_errors() {
     let b3 = Burst::new(&s3, Frame::Cm, 0.5, 0.0, L20, MPC, SNR_X_NODES).unwrap();
     let r3 = snr(&b3, &NoiseCurve::AdvancedLigo, &SnrOptions::default()).unwrap();
     assert!(r3.snr_optimal == Some(0.0) && r3.flags.iter().any(|f| f.key == "no_signal_in_band"));
+    // A slow, wide encounter in LISA peaks near 0.2 mHz: part of ρ² comes from below 0.1 mHz,
+    // where the LISA model is extrapolated; the share is reported and flagged.
+    let s4 = Binary::from_speed(0.5, 0.5, 1e5 / C, 1e4).unwrap();
+    let b4 = Burst::new(&s4, Frame::Cm, 0.5, 0.3, L20, MPC, SNR_X_NODES).unwrap();
+    let r4 = snr(&b4, &NoiseCurve::from_name("lisa").unwrap(), &SnrOptions::default()).unwrap();
+    assert!(r4.extrapolated_share > 0.01 && r4.extrapolated_share < 0.5, "{}", r4.extrapolated_share);
+    assert!(r4.flags.iter().any(|f| f.key == "noise_extrapolated"));
     // Bad options name their field.
     let bad = [
         (SnrOptions { antenna: Some((1.5, 0.0)), ..SnrOptions::default() }, "antenna"),

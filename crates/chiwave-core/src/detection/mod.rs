@@ -26,7 +26,7 @@ mod quadrature;
 mod snr;
 
 pub use burst::{Burst, SNR_X_NODES};
-pub use noise::{LisaObservation, NoiseCurve, NoiseTable, NoiseValidity, Response, NOISE_NAMES};
+pub use noise::{LisaObservation, NoiseCurve, NoisePoint, NoiseTable, NoiseValidity, Response, NOISE_NAMES};
 pub use snr::{snr, HorizonBasis, SnrOptions, SnrResult, DEFAULT_SNR_THRESHOLD, DEFAULT_SNR_TOLERANCE, HUBBLE_CONSTANT_SI, REDSHIFT_CAUTION};
 
 use crate::error::InputError;

@@ -153,6 +153,25 @@ impl LisaObservation {
     }
 }
 
+/// One noise curve evaluated at one frequency (what `chiwave noise --frequency F` prints).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct NoisePoint {
+    /// Name of the curve.
+    pub noise: String,
+    pub frequency_hz: f64,
+    /// Amplitude spectral density, Hz^−1/2.
+    pub asd: f64,
+    /// One-sided power spectral density, Hz⁻¹.
+    pub psd: f64,
+    /// True where the curve is inside the range it was made for ([`NoiseValidity::Valid`]).
+    pub valid: bool,
+    pub validity: NoiseValidity,
+    /// The band (f_low, f_high) in Hz.
+    pub band_hz: (f64, f64),
+    pub response: Response,
+    pub source: &'static str,
+}
+
 /// A tabulated amplitude spectral density (from CSV text), interpolated log–log.
 #[derive(Debug, Clone, PartialEq)]
 pub struct NoiseTable {
@@ -296,6 +315,33 @@ impl NoiseCurve {
     /// As [`NoiseCurve::psd`].
     pub fn asd(&self, f: f64) -> Result<f64, InputError> {
         self.psd(f).map(f64::sqrt)
+    }
+
+    /// ASD, PSD and validity at `f` (Hz), with the curve's name, band and source.
+    ///
+    /// # Errors
+    /// As [`NoiseCurve::psd`]: outside the band the curve is refused.
+    ///
+    /// # Examples
+    /// ```
+    /// use chiwave_core::detection::NoiseCurve;
+    /// let p = NoiseCurve::from_name("lisa").unwrap().point(5e-5).unwrap();
+    /// assert!(!p.valid && p.asd > 0.0); // below 0.1 mHz the LISA model is extrapolated
+    /// ```
+    pub fn point(&self, f: f64) -> Result<NoisePoint, InputError> {
+        let psd = self.psd(f)?;
+        let validity = self.validity(f);
+        Ok(NoisePoint {
+            noise: self.name(),
+            frequency_hz: f,
+            asd: psd.sqrt(),
+            psd,
+            valid: validity == NoiseValidity::Valid,
+            validity,
+            band_hz: self.band(),
+            response: self.response(),
+            source: self.source(),
+        })
     }
 
     fn check(&self, f: f64) -> Result<(), InputError> {

@@ -303,7 +303,7 @@ pub fn snr(burst: &Burst, noise: &NoiseCurve, opts: &SnrOptions) -> Result<SnrRe
                 *l += v;
             }
         }
-        if s.b <= y_valid + 1e-12 && noise.validity(s.a.exp()) == NoiseValidity::Extrapolated {
+        if s.b <= y_valid + 1e-12 && noise.validity((0.5 * (s.a + s.b)).exp()) == NoiseValidity::Extrapolated {
             extrapolated += s.value[3];
         }
     }

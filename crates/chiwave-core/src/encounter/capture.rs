@@ -174,6 +174,9 @@ pub struct Capture {
     pub b_plunge_test_body_gm: f64,
     /// b ≤ b_c: the bodies fall together directly in the test-body limit.
     pub plunge_test_body: bool,
+    /// π b_max² of the relativistic estimate in m², when the masses are physical (the same as
+    /// `physical.cross_section_m2`, at the top level for the CLI contract).
+    pub cross_section_m2: Option<f64>,
     pub physical: Option<CapturePhysical>,
     pub flags: Vec<Flag>,
 }
@@ -412,6 +415,7 @@ pub fn capture(m1: f64, m2: f64, boost: &Boost, b_gm: f64, mass_length_m: Option
         periapsis_speed2_at_b_max: vp2,
         b_plunge_test_body_gm: b_c,
         plunge_test_body: b_gm <= b_c,
+        cross_section_m2: physical.map(|p| p.cross_section_m2),
         physical,
         flags,
     })
