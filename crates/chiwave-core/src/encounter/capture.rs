@@ -93,9 +93,9 @@ pub fn hansen_energy(nu: f64, v: f64, b: f64) -> f64 {
 /// # Examples
 /// ```
 /// use chiwave_core::encounter::capture::b_max_newtonian;
-/// // ν = 1/4, v = 1e-3: (85π)^{1/7} · 1e-3^{−9/7}
+/// // ν = 1/4, v = 1e-3: (85π/3)^{1/7} · 1e-3^{−9/7}
 /// let b = b_max_newtonian(0.25, 1e-3);
-/// assert!((b / ((85.0 * std::f64::consts::PI).powf(1.0 / 7.0) * 1e-3f64.powf(-9.0 / 7.0)) - 1.0).abs() < 1e-14);
+/// assert!((b / ((85.0 * std::f64::consts::PI / 3.0).powf(1.0 / 7.0) * 1e-3f64.powf(-9.0 / 7.0)) - 1.0).abs() < 1e-14);
 /// ```
 pub fn b_max_newtonian(nu: f64, v: f64) -> f64 {
     (340.0 * PI * nu / 3.0).powf(1.0 / 7.0) * v.powf(-9.0 / 7.0)
@@ -281,12 +281,12 @@ fn check_nu(nu: f64) -> Result<(), InputError> {
 /// # Examples
 /// ```
 /// use chiwave_core::encounter::{capture::capture, kinematics::Boost};
-/// // 10 + 10 M☉ at 100 km/s: b_max = (85π)^{1/7} v^{−9/7} ≈ 5.6e4 GM/c² (Newtonian closed form).
+/// // 10 + 10 M☉ at 100 km/s: b_max = (85π/3)^{1/7} v^{−9/7} ≈ 5.6e4 GM/c² (Newtonian closed form).
 /// let v = 1e5 / 299_792_458.0;
 /// let boost = Boost::from_v(v).unwrap();
 /// let c = capture(10.0, 10.0, &boost, 1e4, None).unwrap();
 /// assert!(c.bound_after_passage && c.bound_after_passage_newtonian);
-/// let closed = (85.0 * std::f64::consts::PI).powf(1.0 / 7.0) * v.powf(-9.0 / 7.0);
+/// let closed = (85.0 * std::f64::consts::PI / 3.0).powf(1.0 / 7.0) * v.powf(-9.0 / 7.0);
 /// assert!((c.b_max_newtonian_gm / closed - 1.0).abs() < 1e-14);
 /// assert!((c.b_max_relativistic_gm / closed - 1.0).abs() < 1e-3);
 /// let far = capture(10.0, 10.0, &boost, 1e6, None).unwrap();
