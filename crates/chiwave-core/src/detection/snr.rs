@@ -4,14 +4,15 @@
 //! # Formula
 //! ρ² = 4 ∫ |h̃(f)|²/S_n(f) df over the noise curve's band (the matched-filter SNR of a known
 //! signal in stationary Gaussian noise with one-sided PSD S_n; e.g. Cutler & Flanagan 1994,
-//! arXiv:gr-qc/9402014, eq. 2.8), for the recorded strain h = F₊h₊ + F×h×. Writing
+//! arXiv:gr-qc/9402014, §II — equation number not checked), for the recorded strain
+//! h = F₊h₊ + F×h×. Writing
 //! Γ_ab = 4 ∫ Re(h̃_a h̃_b*)/S_n df (a, b ∈ {+, ×}), ρ² = Fᵀ Γ F for any antenna pattern
 //! (F₊, F×). Derived values:
 //! * optimal orientation: the largest eigenvalue of Γ (an interferometer with the source
 //!   overhead has F = (cos 2ψ, sin 2ψ); the maximum over ψ of Fᵀ Γ F is λ_max);
 //! * sky- and polarisation-averaged (root mean square over isotropic directions and uniform ψ):
 //!   ⟨ρ²⟩ = (Γ₊₊ + Γ××)/5, from ⟨F₊²⟩ = ⟨F×²⟩ = 1/5, ⟨F₊F×⟩ = 0 for a 90° interferometer
-//!   (Thorne 1987 in *300 Years of Gravitation*, eq. 110; checked by averaging
+//!   (Thorne 1987 in *300 Years of Gravitation*, ch. 9, common practice; checked by averaging
 //!   [`crate::waveform::antenna_pattern`] over a grid in `tests/detection_snr.rs`);
 //! * a curve that already contains the sky average (LISA in the form of Robson, Cornish & Liu
 //!   2019, arXiv:1803.01944): ⟨ρ²⟩ = Γ₊₊ + Γ××, their sky-averaged SNR with the factor 3/10 of the
@@ -43,8 +44,8 @@ pub const DEFAULT_SNR_THRESHOLD: f64 = 8.0;
 pub const DEFAULT_SNR_TOLERANCE: f64 = 1e-6;
 /// Largest number of quadrature intervals before the result is returned as not converged.
 const MAX_INTERVALS: usize = 400;
-/// H₀ = 67.4 km/s/Mpc (Planck Collaboration 2020, A&A 641, A6, arXiv:1807.06209, Table 2:
-/// 67.36 ± 0.54), used only for the redshift caution z ≈ H₀D/c.
+/// H₀ = 67.4 km/s/Mpc (Planck Collaboration 2020, A&A 641, A6, arXiv:1807.06209: 67.36 ± 0.54,
+/// recalled from memory), used only for the redshift caution z ≈ H₀D/c.
 pub const HUBBLE_CONSTANT_SI: f64 = 67.4e3 / crate::units::astro::MPC;
 /// Redshift from which distances count as cosmological (common practice): z ≥ 0.1.
 pub const REDSHIFT_CAUTION: f64 = 0.1;
@@ -400,7 +401,7 @@ pub fn snr(burst: &Burst, noise: &NoiseCurve, opts: &SnrOptions) -> Result<SnrRe
             "memory_dominated",
             Level::Caution,
             Some(low_share),
-            format!("{:.0} % of ρ² comes from below f_split = {f_split:.3e} Hz, where h̃ is the memory's 1/f tail: the result rests on the detector's low-frequency sensitivity and on the memory, the least certain parts of both models.", 100.0 * low_share),
+            format!("{:.0} % of ρ² comes from below f_split = {f_split:.3e} Hz, where h̃ is the memory's 1/f tail: the detector sees the permanent strain offset as a step, and ρ rests on the noise curve's low-frequency part (and, for a real search, on how the data are filtered there).", 100.0 * low_share),
         ));
     }
     if extrapolated_share > 0.01 {
