@@ -9,6 +9,7 @@
 //!   scale), read and validated once for every two-body request.
 //! - [`encounter`]: two-body scattering angle, impulse, radiated energy and angular momentum.
 //! - [`waveform`]: leading-order gravitational and electromagnetic waveforms, memory, spectra.
+//! - [`detection`]: detector noise curves, signal-to-noise ratio, horizon distance.
 //! - [`validity`]: regime flags attached to every result.
 //! - [`request`]: the serde request types that the page and the CLI both send.
 //!
@@ -22,6 +23,7 @@
 
 pub mod bessel;
 pub mod deflection;
+pub mod detection;
 pub mod encounter;
 pub mod error;
 pub mod lensing;
