@@ -28,6 +28,7 @@ fn bench(c: &mut Criterion) {
         offset: 0.5,
         frequency: Some("100Hz".into()),
         lens_redshift: 0.5,
+        tolerance: None,
     };
     c.bench_function("lens_request_with_frequency", |b| b.iter(|| black_box(&req).evaluate()));
 }

@@ -10,7 +10,8 @@
 //! - [`encounter`]: two-body scattering angle, impulse, radiated energy and angular momentum.
 //! - [`waveform`]: leading-order gravitational and electromagnetic waveforms, memory, spectra.
 //! - [`detection`]: detector noise curves, signal-to-noise ratio, horizon distance.
-//! - [`validity`]: regime flags attached to every result.
+//! - [`validity`]: regime flags attached to every result; error estimates, the tolerance and the
+//!   one rule that turns an estimate into a verdict (`ok`, `caution`, `outside`); the recommended value.
 //! - [`request`]: the serde request types that the page and the CLI both send.
 //!
 //! Shared tools: [`numeric`] (Gauss–Legendre rules, quadrature, polynomial roots, tolerances),

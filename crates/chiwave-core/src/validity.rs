@@ -5,8 +5,18 @@
 //! for people that says what breaks. Each family declares its checks ([`Check`]: key and label)
 //! once, beside their thresholds, in its `flags.rs` (or where its flags are made). Thresholds
 //! are common practice unless a flag's constructor names a source.
+//!
+//! Error estimates: every approximate value of a result carries an [`ErrorEstimate`] (relative,
+//! with the method that produced it, or null with the reason), and one rule, [`verdict`], turns
+//! it into `ok` / `caution` / `outside` at the request's `tolerance` (default
+//! [`DEFAULT_TOLERANCE`]). Flags that grade the accuracy of a value take their level from the
+//! same verdict ([`Level::from`]), so one condition never gets two levels. Each result names
+//! its recommended value, [`Best`]. The estimators of each family are in its `accuracy.rs`;
+//! `docs/physics/accuracy.md` says why each is conservative.
 
+use crate::error::InputError;
 use serde::Serialize;
+use std::collections::BTreeMap;
 
 /// How far a result can be trusted in a regime.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
@@ -103,6 +113,168 @@ pub fn worst(flags: &[Flag]) -> Level {
     flags.iter().map(|f| f.level).max().unwrap_or(Level::Ok)
 }
 
+// ------------------------------------------------------------------------------------------
+// Error estimates and verdicts
+// ------------------------------------------------------------------------------------------
+
+/// Default relative tolerance of the verdicts (the `tolerance` field of every request).
+pub const DEFAULT_TOLERANCE: f64 = 1e-2;
+/// Smallest tolerance accepted: below it even the exact values' rounding bounds fail it.
+pub const TOLERANCE_MIN: f64 = 1e-12;
+/// Largest tolerance accepted: a relative error of one half is the end of "an estimate".
+pub const TOLERANCE_MAX: f64 = 0.5;
+
+/// The tolerance of a request: `None` gives [`DEFAULT_TOLERANCE`].
+///
+/// # Errors
+/// [`InputError`] naming `tolerance` when it is not finite or outside
+/// [`TOLERANCE_MIN`] … [`TOLERANCE_MAX`].
+///
+/// # Examples
+/// ```
+/// use chiwave_core::validity::tolerance;
+/// assert_eq!(tolerance(None).unwrap(), 1e-2);
+/// assert!(tolerance(Some(2.0)).unwrap_err().to_string().starts_with("tolerance:"));
+/// ```
+pub fn tolerance(t: Option<f64>) -> Result<f64, InputError> {
+    let Some(t) = t else { return Ok(DEFAULT_TOLERANCE) };
+    crate::error::finite("tolerance", t)?;
+    if (TOLERANCE_MIN..=TOLERANCE_MAX).contains(&t) {
+        Ok(t)
+    } else {
+        Err(InputError::OutOfRange {
+            field: "tolerance",
+            value: t,
+            allowed: format!("{TOLERANCE_MIN:e} ≤ tolerance ≤ {TOLERANCE_MAX} (relative error)"),
+        })
+    }
+}
+
+/// How a value compares with the tolerance, judged on its error estimate ([`verdict`]).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Verdict {
+    /// Estimated relative error below the tolerance.
+    Ok,
+    /// Estimated relative error between the tolerance and ten times it.
+    Caution,
+    /// Estimated relative error beyond ten times the tolerance, or no estimate.
+    Outside,
+}
+
+/// The one rule that turns an error estimate into a verdict, for every value of every result.
+///
+/// # Formula
+/// `ok` if estimate < tolerance, `caution` if estimate < 10·tolerance, `outside` otherwise and
+/// when there is no estimate (`None`, or not a finite number ≥ 0).
+///
+/// # Examples
+/// ```
+/// use chiwave_core::validity::{verdict, Verdict};
+/// assert_eq!(verdict(Some(1e-3), 1e-2), Verdict::Ok);
+/// assert_eq!(verdict(Some(5e-2), 1e-2), Verdict::Caution);
+/// assert_eq!(verdict(Some(0.2), 1e-2), Verdict::Outside);
+/// assert_eq!(verdict(None, 1e-2), Verdict::Outside);
+/// ```
+pub fn verdict(estimate: Option<f64>, tolerance: f64) -> Verdict {
+    match estimate {
+        Some(e) if e >= 0.0 && e < tolerance => Verdict::Ok,
+        Some(e) if e >= 0.0 && e < 10.0 * tolerance => Verdict::Caution,
+        _ => Verdict::Outside,
+    }
+}
+
+impl From<Verdict> for Level {
+    /// The level of a regime flag that judges the same value as a verdict.
+    fn from(v: Verdict) -> Level {
+        match v {
+            Verdict::Ok => Level::Ok,
+            Verdict::Caution => Level::Caution,
+            Verdict::Outside => Level::Invalid,
+        }
+    }
+}
+
+/// The error estimate of one value: relative, ≥ 0, with the method that produced it, or null
+/// with the reason; and its [`verdict`] at the request's tolerance. JSON keys `error_estimate`,
+/// `error_method`, `error_reason`, `verdict` (flattened into `series` and `orders` entries, and
+/// the values of a result's `estimates` map).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct ErrorEstimate {
+    /// Estimated relative error |value − truth|/|truth|, or null (see `error_reason`).
+    pub error_estimate: Option<f64>,
+    /// How the estimate was made, in a few words (e.g. "vs the exact α").
+    pub error_method: String,
+    /// Why there is no estimate (null when there is one).
+    pub error_reason: Option<String>,
+    pub verdict: Verdict,
+}
+
+impl ErrorEstimate {
+    /// An estimate made by `method`; a non-finite or negative number becomes "no estimate".
+    pub fn new(estimate: f64, method: impl Into<String>, tolerance: f64) -> Self {
+        if estimate.is_finite() && estimate >= 0.0 {
+            ErrorEstimate { error_estimate: Some(estimate), error_method: method.into(), error_reason: None, verdict: verdict(Some(estimate), tolerance) }
+        } else {
+            ErrorEstimate::none(format!("the estimate is not a finite number ({estimate})"), method, tolerance)
+        }
+    }
+
+    /// No estimate, for `reason`; the verdict is `outside`.
+    pub fn none(reason: impl Into<String>, method: impl Into<String>, tolerance: f64) -> Self {
+        ErrorEstimate { error_estimate: None, error_method: method.into(), error_reason: Some(reason.into()), verdict: verdict(None, tolerance) }
+    }
+
+    /// [`ErrorEstimate::new`] for `Some`, [`ErrorEstimate::none`] with `reason` for `None`.
+    pub fn from_option(estimate: Option<f64>, method: impl Into<String>, reason: impl Into<String>, tolerance: f64) -> Self {
+        match estimate {
+            Some(e) => ErrorEstimate::new(e, method, tolerance),
+            None => ErrorEstimate::none(reason, method, tolerance),
+        }
+    }
+
+    /// The estimate, when there is one.
+    pub fn value(&self) -> Option<f64> {
+        self.error_estimate
+    }
+}
+
+/// Error estimates of the approximate values of a result that are not in `series` or `orders`,
+/// keyed by the value's JSON key (dotted for nested keys, e.g. `strong_deflection.alpha`).
+pub type Estimates = BTreeMap<&'static str, ErrorEstimate>;
+
+/// The recommended value of a result: the most accurate value it holds (`key` names it, dotted
+/// for nested keys), with its error estimate and verdict and why it was chosen. `value` is null
+/// (with `why`) when nothing qualifies.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Best {
+    pub key: &'static str,
+    pub value: Option<f64>,
+    pub error_estimate: Option<f64>,
+    pub error_method: String,
+    pub verdict: Verdict,
+    pub why: String,
+}
+
+impl Best {
+    /// The value under `key` with its estimate.
+    pub fn new(key: &'static str, value: f64, estimate: &ErrorEstimate, why: impl Into<String>) -> Self {
+        Best {
+            key,
+            value: Some(value),
+            error_estimate: estimate.error_estimate,
+            error_method: estimate.error_method.clone(),
+            verdict: estimate.verdict,
+            why: why.into(),
+        }
+    }
+
+    /// Nothing to recommend under `key`, for the reason `why`.
+    pub fn none(key: &'static str, why: impl Into<String>, tolerance: f64) -> Self {
+        Best { key, value: None, error_estimate: None, error_method: String::new(), verdict: verdict(None, tolerance), why: why.into() }
+    }
+}
+
 /// The standing caution shown with every result on the page and in the CLI tables.
 pub const ESTIMATE_NOTICE: &str =
     "Results are analytic and perturbative estimates with stated validity; they are not a substitute for full numerical simulations.";
@@ -121,5 +293,19 @@ mod tests {
         assert_eq!(g.level, Level::Ok);
         assert_eq!(worst(&[f, g]), Level::Invalid);
         assert_eq!(worst(&[]), Level::Ok);
+    }
+
+    #[test]
+    fn verdict_edges() {
+        // The rule at its edges (definition, no source): strict inequalities, NaN and negatives refused.
+        assert_eq!(verdict(Some(0.0), 1e-2), Verdict::Ok);
+        assert_eq!(verdict(Some(1e-2), 1e-2), Verdict::Caution);
+        assert_eq!(verdict(Some(0.1), 1e-2), Verdict::Outside);
+        assert_eq!(verdict(Some(f64::NAN), 1e-2), Verdict::Outside);
+        assert_eq!(verdict(Some(-1e-3), 1e-2), Verdict::Outside);
+        assert_eq!(Level::from(Verdict::Caution), Level::Caution);
+        let e = ErrorEstimate::new(f64::INFINITY, "m", 1e-2);
+        assert!(e.error_estimate.is_none() && e.error_reason.is_some() && e.verdict == Verdict::Outside);
+        assert!(tolerance(Some(1e-13)).is_err() && tolerance(Some(f64::NAN)).is_err() && tolerance(Some(0.5)).is_ok());
     }
 }

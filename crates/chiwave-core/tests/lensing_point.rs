@@ -16,6 +16,7 @@ fn example(offset: f64) -> LensRequest {
         offset,
         frequency: None,
         lens_redshift: 0.0,
+        tolerance: None,
     }
 }
 

@@ -30,6 +30,7 @@ proptest! {
             offset: u,
             frequency: f.map(|v| Quantity::Parts { value: v, unit: "Hz".into() }),
             lens_redshift: z,
+            tolerance: None,
         };
         match r.evaluate() {
             Ok(out) => {

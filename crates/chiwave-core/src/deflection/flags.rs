@@ -1,9 +1,11 @@
 //! Regime checks of a light-deflection result (thresholds are common practice unless stated). The
 //! order in which they are pushed is the order of the `flags` array in the result.
 
+use super::accuracy::LightAccuracy;
 use super::request::Validated;
+use super::results::SeriesTerm;
 use super::Metric;
-use crate::validity::{geometric_optics_level, Check, Flag, Level};
+use crate::validity::{verdict, Check, Flag, Level, Verdict};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const CAPTURE: Check = Check::new("capture", "capture b/b_c − 1");
@@ -15,21 +17,40 @@ const STRONG_DEFLECTION: Check = Check::new("strong_deflection", "strong-deflect
 const BEAM_VS_IMPACT: Check = Check::new("beam_vs_impact", "beam width/b");
 const WAVELENGTH_VS_BEAM: Check = Check::new("wavelength_vs_beam", "wavelength/beam width");
 
-/// The regime flags for one evaluation (thresholds are common practice unless stated).
-pub(crate) fn light(v: &Validated, d: f64) -> Vec<Flag> {
+/// Relative error shown in a message: two significant digits.
+fn rel(x: f64) -> String {
+    format!("{x:.1e}")
+}
+
+/// The regime flags for one evaluation (thresholds are common practice unless stated). Flags
+/// that grade the accuracy of a value (`weak_field`, `series_convergence`, `strong_deflection`)
+/// take their level from that value's verdict; the others describe conditions.
+pub(crate) fn light(v: &Validated, d: f64, alpha: Option<f64>, series: &[SeriesTerm], acc: &LightAccuracy) -> Vec<Flag> {
     let mut out = Vec::new();
     let captured = d <= 0.0;
-    out.push(Flag::small_parameter(
-        WEAK_FIELD,
-        1.0 / v.b,
-        1e-3,
-        0.05,
-        [
-            "M/b ≪ 1: the first-order value 4M/b is good to about 3(M/b) relative (the 15π/4 term).",
-            "M/b is not small: 4M/b (and the PPN 1PM form) misses the higher orders at the level of 3(M/b); use the exact alpha or more series orders.",
-            "strong field: the weak-field and PPN values are no prediction here; only the exact alpha holds.",
-        ],
-    ));
+    let last = series.last();
+    let series_note = match last.and_then(|t| t.estimate.error_estimate.map(|e| (t.order, e))) {
+        Some((n, e)) => format!("; the series to order {n} is within {} of it", rel(e)),
+        None => String::new(),
+    };
+    // weak_field: judged on the first-order value 4M/b against the exact α.
+    let first = &acc.estimates["ppn.alpha_1pm_gr"];
+    out.push(match (alpha, first.error_estimate) {
+        (Some(_), Some(e)) => Flag::new(
+            WEAK_FIELD,
+            Level::from(first.verdict),
+            Some(1.0 / v.b),
+            match first.verdict {
+                Verdict::Ok => format!("M/b = {:.3e}: the first-order value 4M/b (and the PPN first-order forms) is within {} of the exact α{series_note}.", 1.0 / v.b, rel(e)),
+                _ => format!(
+                    "M/b = {:.3e}: the first-order value 4M/b (and the PPN first-order forms) is {} from the exact α; use the exact α{series_note}.",
+                    1.0 / v.b,
+                    rel(e)
+                ),
+            },
+        ),
+        _ => Flag::new(WEAK_FIELD, Level::Invalid, Some(1.0 / v.b), "b ≤ b_c: the ray is captured; the first-order and PPN values describe no deflection here."),
+    });
     out.push(if captured {
         Flag::new(CAPTURE, Level::Invalid, Some(d), "b ≤ b_c: the ray is captured by the hole; there is no deflection angle (alpha = null).")
     } else if d < 0.01 {
@@ -37,53 +58,53 @@ pub(crate) fn light(v: &Validated, d: f64) -> Vec<Flag> {
             CAPTURE,
             Level::Caution,
             Some(d),
-            "within 1% of the critical impact parameter: the ray winds near the photon orbit and alpha ∝ −ln(b/b_c − 1) is very sensitive to b.",
+            format!("b/b_c − 1 = {d:.2e}: within 1% of the critical impact parameter; the ray winds near the photon orbit and α ∝ −ln(b/b_c − 1) is very sensitive to b."),
         )
+    } else if d < 1.0 {
+        Flag::new(CAPTURE, Level::Ok, Some(d), format!("b/b_c − 1 = {d:.3}: the ray escapes (b > b_c), passing near the photon orbit."))
     } else {
-        Flag::new(CAPTURE, Level::Ok, Some(d), "well outside the capture cross-section (b/b_c − 1 ≥ 0.01).")
+        Flag::new(CAPTURE, Level::Ok, Some(d), format!("b/b_c − 1 = {d:.3}: well outside the capture cross-section (b > 2 b_c)."))
     });
     let ratio = 1.0 / (d + 1.0);
     let note = match v.metric {
         Metric::Schwarzschild => "",
         _ => " (for Kerr and Reissner–Nordström the radius b_c is expected, not proven)",
     };
-    out.push(if ratio >= 1.0 {
-        Flag::new(
+    out.push(match (ratio >= 1.0, last) {
+        (false, Some(t)) => Flag::new(
+            SERIES_CONVERGENCE,
+            Level::from(t.estimate.verdict),
+            Some(ratio),
+            match t.estimate.error_estimate {
+                Some(e) => format!("b_c/b = {ratio:.3}: the series converges (b > b_c{note}); through order {} it is within {} of the exact α.", t.order, rel(e)),
+                None => format!("b_c/b = {ratio:.3}: the series converges (b > b_c{note}), but its error could not be estimated."),
+            },
+        ),
+        _ => Flag::new(
             SERIES_CONVERGENCE,
             Level::Invalid,
             Some(ratio),
             format!("b ≤ b_c: the weak-field series diverges, its partial sums approximate nothing{note}."),
-        )
-    } else if ratio > 0.5 {
-        Flag::new(
-            SERIES_CONVERGENCE,
-            Level::Caution,
-            Some(ratio),
-            format!("the series converges only for b > b_c; here its terms shrink only like (b_c/b)^n, so low orders are far off{note}."),
-        )
-    } else {
-        Flag::new(SERIES_CONVERGENCE, Level::Ok, Some(ratio), format!("b > 2 b_c: the series converges, terms shrink at least like 2^-n{note}."))
+        ),
     });
-    if matches!(v.metric, Metric::Schwarzschild) && !captured {
-        out.push(Flag::small_parameter(
+    let lead = &acc.estimates["strong_deflection.alpha"];
+    if let (Metric::Schwarzschild, false, Some(e)) = (v.metric, captured, lead.error_estimate) {
+        out.push(Flag::new(
             STRONG_DEFLECTION,
-            d,
-            1e-3,
-            0.05,
-            [
-                "d = b/b_c − 1 ≪ 1: Bozza's logarithmic form is accurate (error ∝ d ln d).",
-                "d = b/b_c − 1 is not small: the strong-deflection log form is indicative only.",
-                "far from the photon sphere: the strong-deflection log form does not apply.",
-            ],
+            Level::from(lead.verdict),
+            Some(d),
+            format!("d = b/b_c − 1 = {d:.2e}: Bozza's logarithmic form is within about {} of the exact α here (its error grows like d ln d).", rel(e)),
         ));
     }
     if let Some(lambda) = v.wavelength {
         let w = 8.0 * std::f64::consts::PI / lambda;
-        let level = geometric_optics_level(w);
-        let msg = match level {
-            Level::Ok => "w = 4π·2M/λ ≫ 1: the wavelength is far below the Schwarzschild radius; geometric optics (rays) holds.",
-            Level::Caution => "w = 4π·2M/λ is only moderately large: wave-optics corrections (interference, diffraction) of order 1/w matter.",
-            Level::Invalid => "w = 4π·2M/λ ≲ 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).",
+        // Geometric optics holds up to corrections of relative order 1/w (Takahashi & Nakamura
+        // 2003, astro-ph/0305055): the validity parameter's scaling, judged by the one verdict rule.
+        let level = Level::from(verdict(Some(1.0 / w), v.tolerance));
+        let msg = if w >= 1.0 {
+            format!("w = 4π·2M/λ = {w:.3e}: wave-optics corrections (interference, diffraction) to the ray picture are of relative order 1/w = {}.", rel(1.0 / w))
+        } else {
+            format!("w = 4π·2M/λ = {w:.3e} < 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).")
         };
         out.push(Flag::new(GEOMETRIC_OPTICS, level, Some(w), msg));
     }

@@ -109,17 +109,24 @@ pub fn closest_approach(b: f64, a: f64) -> Option<f64> {
 /// assert!((alpha - 0.504_632_984_000_672_4).abs() < 1e-13);
 /// ```
 pub fn deflection(b: f64, a: f64) -> Result<Deflection, InputError> {
+    deflection_with_accuracy(b, a).map(|(d, _)| d)
+}
+
+/// [`deflection`] and the relative accuracy of its α: the difference of the two quadrature
+/// rules over α (1e-16, one rounding, for the closed weak-field form used at b > 1e30; 0 when
+/// captured).
+pub(crate) fn deflection_with_accuracy(b: f64, a: f64) -> Result<(Deflection, f64), InputError> {
     positive("b", b)?;
     in_closed("spin", a, -1.0, 1.0)?;
     if b <= critical_b(a) {
-        return Ok(Deflection::Captured);
+        return Ok((Deflection::Captured, 0.0));
     }
     let sigma = turning_point(b, a);
     let r0 = b / sigma;
     if b > 1e30 {
         // Weak-field terms 4ε + (15π/4)ε² − 4εA are exact to f64 here (sheet §2 table).
         let e = 1.0 / b;
-        return Ok(Deflection::Scattered { alpha: 4.0 * e + 3.75 * PI * e * e - 4.0 * e * e * a, closest_approach: r0 });
+        return Ok((Deflection::Scattered { alpha: 4.0 * e + 3.75 * PI * e * e - 4.0 * e * e * a, closest_approach: r0 }, 1e-16));
     }
     let aa = a / b;
     let eps = 1.0 / b;
@@ -137,6 +144,6 @@ pub fn deflection(b: f64, a: f64) -> Result<Deflection, InputError> {
         let num = aa * st * (2.0 * eps - aa * st) + (1.0 - d1) * w1 / (1.0 + sw);
         num / ((1.0 - d1) * sw)
     };
-    let integral = theta_integral(f, rho, 4.0 * eps, "the Kerr deflection")?;
-    Ok(Deflection::Scattered { alpha: 2.0 * integral, closest_approach: r0 })
+    let (integral, diff) = theta_integral(f, rho, 4.0 * eps, "the Kerr deflection")?;
+    Ok((Deflection::Scattered { alpha: 2.0 * integral, closest_approach: r0 }, diff / integral.abs().max(f64::MIN_POSITIVE)))
 }

@@ -37,11 +37,13 @@ pub use rays::{rays, Ray, RayFan};
 pub use sweep::Sweep;
 pub use sweep::{sweep, AlphaSweep, SweepSeries};
 
+mod accuracy;
 mod flags;
 mod request;
 mod results;
 mod sources;
 
+pub use accuracy::{strong_reported, STRONG_DEFLECTION_MAX_CORRECTION};
 pub use request::{LightRequest, B_MAX, B_MIN};
 pub(crate) use request::check_b;
 pub use results::{LightPhysical, LightResult, SeriesTerm};

@@ -97,16 +97,23 @@ pub fn closest_approach(b: f64, q: f64) -> Option<f64> {
 /// assert!((alpha - 0.575_610_050_252_044_1).abs() < 1e-13);
 /// ```
 pub fn deflection(b: f64, q: f64) -> Result<Deflection, InputError> {
+    deflection_with_accuracy(b, q).map(|(d, _)| d)
+}
+
+/// [`deflection`] and the relative accuracy of its α: the difference of the two quadrature
+/// rules over α (1e-16, one rounding, for the closed weak-field form used at b > 1e30; 0 when
+/// captured).
+pub(crate) fn deflection_with_accuracy(b: f64, q: f64) -> Result<(Deflection, f64), InputError> {
     positive("b", b)?;
     in_closed("charge", q, -1.0, 1.0)?;
     if b <= critical_b(q) {
-        return Ok(Deflection::Captured);
+        return Ok((Deflection::Captured, 0.0));
     }
     let r0 = turning_point(b, q)?;
     if b > 1e30 {
         // Weak-field terms 4ε + (15π/4)ε² − (3π/4)q² are exact to f64 here (sheet §2 table).
         let e = 1.0 / b;
-        return Ok(Deflection::Scattered { alpha: 4.0 * e + (3.75 - 0.75 * q * q) * PI * e * e, closest_approach: r0 });
+        return Ok((Deflection::Scattered { alpha: 4.0 * e + (3.75 - 0.75 * q * q) * PI * e * e, closest_approach: r0 }, 1e-16));
     }
     let sigma = b / r0;
     let eps = 1.0 / b;
@@ -122,6 +129,6 @@ pub fn deflection(b: f64, q: f64) -> Result<Deflection, InputError> {
         let sw = (1.0 - w).sqrt();
         w / (sw * (1.0 + sw))
     };
-    let integral = theta_integral(f, rho, 4.0 * eps, "the Reissner–Nordström deflection")?;
-    Ok(Deflection::Scattered { alpha: 2.0 * integral, closest_approach: r0 })
+    let (integral, diff) = theta_integral(f, rho, 4.0 * eps, "the Reissner–Nordström deflection")?;
+    Ok((Deflection::Scattered { alpha: 2.0 * integral, closest_approach: r0 }, diff / integral.abs().max(f64::MIN_POSITIVE)))
 }

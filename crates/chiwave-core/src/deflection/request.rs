@@ -2,7 +2,7 @@
 //! ...}`), its validation and its evaluation.
 
 use super::results::{LightPhysical, LightResult, SeriesTerm};
-use super::{flags, ppn, series, sources, strong, Metric};
+use super::{accuracy, flags, ppn, series, sources, strong, Metric};
 use crate::error::{finite, in_closed, InputError};
 use crate::units::{parse_length, parse_mass, AngleUnit, Mass, Quantity};
 use serde::{Deserialize, Serialize};
@@ -59,6 +59,9 @@ pub struct LightRequest {
     /// Optional solar elongation of the ray in degrees, 0 < φ ≤ 180, for the finite-distance PPN form.
     #[serde(default)]
     pub elongation_deg: Option<f64>,
+    /// Relative tolerance of the verdicts, 1e-12 … 0.5 (default 1e-2).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub tolerance: Option<f64>,
 }
 
 impl LightRequest {
@@ -74,6 +77,7 @@ impl LightRequest {
             wavelength: None,
             beam_width: None,
             elongation_deg: None,
+            tolerance: None,
         }
     }
 }
@@ -90,12 +94,14 @@ pub(crate) struct Validated {
     pub wavelength: Option<f64>,
     pub beam: Option<f64>,
     pub elongation: Option<f64>,
+    pub tolerance: f64,
 }
 
 impl LightRequest {
     /// Checks every field and converts to units of M.
     pub(crate) fn validate(&self) -> Result<Validated, InputError> {
         let metric = Metric::new(self.spin, self.charge)?;
+        let tolerance = crate::validity::tolerance(self.tolerance)?;
         in_closed("ppn_gamma", self.ppn_gamma, 0.0, 2.0)?;
         if !(1..=series::MAX_ORDER).contains(&self.orders) {
             return Err(InputError::OutOfRange {
@@ -133,7 +139,7 @@ impl LightRequest {
             }
             None => None,
         };
-        Ok(Validated { metric, b, mass, mass_len, gamma: self.ppn_gamma, orders: self.orders, wavelength, beam, elongation })
+        Ok(Validated { metric, b, mass, mass_len, gamma: self.ppn_gamma, orders: self.orders, wavelength, beam, elongation, tolerance })
     }
 
     /// Evaluates the request: exact α (or capture), closest approach, critical b, weak-field
@@ -160,19 +166,21 @@ impl LightRequest {
     /// ```
     pub fn evaluate(&self) -> Result<LightResult, InputError> {
         let v = self.validate()?;
-        let defl = v.metric.deflection(v.b)?;
+        let (defl, acc, acc_method) = accuracy::exact_with_accuracy(v.metric, v.b)?;
         let alpha = defl.alpha();
         let bc = v.metric.critical_b();
         let coeffs = v.metric.series_coefficients(v.orders);
         let sums = series::partial_sums(&coeffs, v.b, 0.5 * (1.0 + v.gamma));
-        let series = sums
-            .iter()
-            .enumerate()
-            .map(|(i, s)| SeriesTerm { order: i + 1, alpha: *s, rel_error: alpha.map(|a| (s - a) / a) })
-            .collect();
         let d = v.b / bc - 1.0;
+        let acc = accuracy::light(alpha, acc, acc_method, &coeffs, &sums, v.b, v.gamma, v.metric, d, v.elongation.is_some(), v.tolerance);
+        let series: Vec<SeriesTerm> = sums
+            .iter()
+            .zip(&acc.series)
+            .enumerate()
+            .map(|(i, (s, e))| SeriesTerm { order: i + 1, alpha: *s, rel_error: alpha.map(|a| (s - a) / a), estimate: e.clone() })
+            .collect();
         let strong_deflection = match (v.metric, alpha) {
-            (Metric::Schwarzschild, Some(a)) => strong::compare(d, a),
+            (Metric::Schwarzschild, Some(a)) if accuracy::strong_reported(d).is_ok() => strong::compare(d, a),
             _ => None,
         };
         let ppn = ppn::evaluate(v.b, v.gamma, v.elongation);
@@ -196,7 +204,10 @@ impl LightRequest {
             }
         });
         let alpha_arcsec = physical.as_ref().and_then(|p| p.alpha_arcsec);
+        let flags = flags::light(&v, d, alpha, &series, &acc);
         Ok(LightResult {
+            best: acc.best,
+            tolerance: v.tolerance,
             metric: v.metric.name(),
             alpha,
             captured: alpha.is_none(),
@@ -209,7 +220,8 @@ impl LightRequest {
             ppn,
             alpha_arcsec,
             physical,
-            flags: flags::light(&v, d),
+            estimates: acc.estimates,
+            flags,
             sources: sources::light(v.metric),
         })
     }

@@ -2,7 +2,7 @@
 //! order written here).
 
 use super::{ppn, strong};
-use crate::validity::Flag;
+use crate::validity::{Best, ErrorEstimate, Estimates, Flag};
 use serde::Serialize;
 use std::collections::BTreeMap;
 
@@ -15,6 +15,10 @@ pub struct SeriesTerm {
     pub alpha: f64,
     /// (partial sum − exact α)/exact α; `None` when captured.
     pub rel_error: Option<f64>,
+    /// Its error estimate and verdict (JSON keys `error_estimate`, `error_method`,
+    /// `error_reason`, `verdict`, beside the keys above).
+    #[serde(flatten)]
+    pub estimate: ErrorEstimate,
 }
 
 /// SI values, present when the mass has a physical unit (JSON key `physical`).
@@ -42,6 +46,10 @@ pub struct LightPhysical {
 /// Light-deflection result (JSON keys are the CLI contract).
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct LightResult {
+    /// The recommended value: the exact α (or null when captured), with its numerical accuracy.
+    pub best: Best,
+    /// The relative tolerance the verdicts were judged against.
+    pub tolerance: f64,
     /// `"schwarzschild"`, `"kerr"` or `"reissner-nordstrom"`.
     pub metric: &'static str,
     /// Exact deflection, radians, positive toward the lens; `None` when captured.
@@ -58,7 +66,9 @@ pub struct LightResult {
     pub impact_parameter_alias: f64,
     /// Partial sums of the weak-field series, orders 1..=orders.
     pub series: Vec<SeriesTerm>,
-    /// Bozza's log limit beside the exact value (Schwarzschild, not captured; otherwise null).
+    /// Bozza's log limit beside the exact value: Schwarzschild, not captured, and only where the
+    /// expansion is meaningful (`deflection::strong_reported`); otherwise null, with the reason
+    /// in `estimates["strong_deflection.alpha"].error_reason`.
     pub strong_deflection: Option<strong::StrongDeflection>,
     pub ppn: ppn::Ppn,
     /// α in arcsec, only with a physical mass.
@@ -66,6 +76,9 @@ pub struct LightResult {
     pub alpha_arcsec: Option<f64>,
     #[serde(skip_serializing_if = "Option::is_none")]
     pub physical: Option<LightPhysical>,
+    /// Error estimates of the other approximate values (PPN first-order forms, the
+    /// strong-deflection values), keyed by their JSON key.
+    pub estimates: Estimates,
     pub flags: Vec<Flag>,
     /// Output key → citation of the formula that produced it.
     pub sources: BTreeMap<&'static str, &'static str>,

@@ -4,7 +4,7 @@
 //! whose doc comments give the sources (Darwin 1959; Keeton & Petters 2005, gr-qc/0511019, and
 //! the series generated in code).
 
-use super::{series, strong, LightRequest, Metric};
+use super::{series, LightRequest, Metric};
 use crate::error::{positive, InputError};
 use serde::Serialize;
 
@@ -33,7 +33,8 @@ pub struct AlphaSweep {
     pub alpha: Vec<Option<f64>>,
     /// Partial sums of orders 1..=orders.
     pub series: Vec<SweepSeries>,
-    /// Bozza's leading log form at each escaping b (Schwarzschild only, else absent).
+    /// Bozza's leading log form at each escaping b where it is meaningful
+    /// ([`super::strong_reported`]; null elsewhere). Schwarzschild only, else absent.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub strong_deflection: Option<Vec<Option<f64>>>,
 }
@@ -89,7 +90,9 @@ pub fn sweep(req: &LightRequest, b_min: f64, b_max: f64, n: usize) -> Result<Alp
         .map(|k| SweepSeries { order: k + 1, alpha: sums.iter().map(|s| s[k]).collect() })
         .collect();
     let bc = metric.critical_b();
+    // Only where the expansion means something (the rule of the light result, so the curve and
+    // the table agree; no negative angles far from the photon sphere).
     let strong_deflection = matches!(metric, Metric::Schwarzschild)
-        .then(|| b.iter().map(|&bi| strong::limit(bi / bc - 1.0).map(|(lead, _)| lead)).collect());
+        .then(|| b.iter().map(|&bi| super::strong_reported(bi / bc - 1.0).ok().map(|(lead, _)| lead)).collect());
     Ok(AlphaSweep { metric: metric.name(), critical_b: bc, b, alpha, series, strong_deflection })
 }

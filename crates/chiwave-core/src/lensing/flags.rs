@@ -2,8 +2,7 @@
 //! optics (thresholds are common practice unless a flag names a source).
 
 use super::wave;
-use crate::units::codata2018::C;
-use crate::validity::{geometric_optics_level, Check, Flag, Level};
+use crate::validity::{verdict, Check, ErrorEstimate, Flag, Level, Verdict};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const DISTANCES: Check = Check::new("distances", "distances");
@@ -15,20 +14,20 @@ const EINSTEIN_ANGLE: Check = Check::new("einstein_angle", "Einstein angle θ_E"
 const INTERFERENCE_PHASE: Check = Check::new("interference_phase", "interference phase wΔT");
 
 /// Flags for the ray-optics point lens: thin lens / weak deflection, distances, offset regime.
-pub(crate) fn point_lens(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec<Flag> {
+/// `alpha_e` is the deflection at the Einstein ring 4GM/(c²R_E), `u` the offset, `mu` the total
+/// magnification; `thin_lens` takes its level from the verdict on `alpha_e` (the same rule as
+/// every error estimate).
+pub(crate) fn point_lens(theta: f64, alpha_e: f64, z_l: f64, u: f64, mu: f64, tol: f64) -> Vec<Flag> {
     let mut flags = Vec::new();
-    // Deflection at the Einstein ring, 4GM/(c² R_E): the thin-lens formulas are its first order.
-    let alpha_e = 4.0 * gm / (C * C) / r_e;
-    flags.push(Flag::small_parameter(
+    let v = verdict(Some(alpha_e), tol);
+    flags.push(Flag::new(
         THIN_LENS,
-        alpha_e,
-        1e-4,
-        1e-2,
-        [
-            "Weak deflection at the Einstein ring (4GM/(c²R_E) small): thin-lens point-mass formulas apply, provided the lens is compact (its size ≪ R_E) and isolated.",
-            "The deflection at the Einstein ring is not tiny: second-order (post-thin-lens) corrections reach this relative size.",
-            "Strong deflection at the Einstein ring: the thin-lens weak-field formulas do not hold; use the exact deflection.",
-        ],
+        Level::from(v),
+        Some(alpha_e),
+        match v {
+            Verdict::Ok => format!("Deflection at the Einstein ring 4GM/(c²R_E) = {alpha_e:.2e}: the thin-lens point-mass formulas hold to about this relative size, provided the lens is compact (its size ≪ R_E) and isolated."),
+            _ => format!("Deflection at the Einstein ring 4GM/(c²R_E) = {alpha_e:.2e} is not small: post-thin-lens corrections reach this relative size; use the exact deflection."),
+        },
     ));
     flags.push(Flag::small_parameter(
         EINSTEIN_ANGLE,
@@ -56,21 +55,31 @@ pub(crate) fn point_lens(theta: f64, gm: f64, r_e: f64, z_l: f64, u: f64) -> Vec
             "Flat-space distances, D_LS = D_S − D_L (Galactic lens).",
         ));
     }
-    let (level, msg) = if u < 0.01 {
-        (Level::Caution, "Source within 0.01 θ_E of the lens: point-source magnification ≈ 1/u; a finite source size caps it.")
-    } else if u < 1.0 {
-        (Level::Ok, "Strong lensing regime: the source lies inside the Einstein ring (μ_tot > 1.342); two bright images.")
-    } else if u < 10.0 {
-        (Level::Ok, "Source outside the Einstein ring: the saddle image is faint (μ_tot < 1.342).")
+    // The images lie at x± = (u ± √(u² + 4))/2 θ_E, separated by √(u² + 4) θ_E ≥ 2θ_E; below
+    // about 50 mas (the diffraction limit of a 2–3 m telescope in the optical, common practice)
+    // they are not resolved and only the total magnification is observed (microlensing).
+    let sep_mas = (u * u + 4.0).sqrt() * theta * 648_000_000.0 / std::f64::consts::PI;
+    let seen = if sep_mas < 50.0 {
+        format!("the images, {sep_mas:.3} mas apart, are not resolved by ordinary telescopes: the observable is the total magnification μ = {mu:.4}")
     } else {
-        (Level::Ok, "Weak lensing regime (u ≥ 10): μ_tot − 1 ≈ 2/u⁴, the saddle image is negligible.")
+        format!("the images are {sep_mas:.4e} mas apart; total magnification μ = {mu:.4}")
+    };
+    let (level, msg) = if u < 0.01 {
+        (Level::Caution, format!("Source within 0.01 θ_E of the lens: the point-source magnification ≈ 1/u; a finite source size caps it; {seen}."))
+    } else if u < 1.0 {
+        (Level::Ok, format!("Source inside the Einstein ring (u < 1, μ > 1.342): two images on either side of the lens; {seen}."))
+    } else if u < 10.0 {
+        (Level::Ok, format!("Source outside the Einstein ring (u ≥ 1, μ ≤ 1.342): the saddle image is the fainter one; {seen}."))
+    } else {
+        (Level::Ok, format!("Source far outside the Einstein ring (u ≥ 10): μ − 1 ≈ 2/u⁴ = {:.2e}, the saddle image is negligible.", 2.0 / u.powi(4)))
     };
     flags.push(Flag::new(LENSING_STRENGTH, level, Some(u), msg));
     flags
 }
 
-/// Flags for the wave-optics part: geometric-optics validity and the F method.
-pub(crate) fn wave_optics(w: f64, delta_t: f64, method: wave::Method) -> Vec<Flag> {
+/// Flags for the wave-optics part: geometric-optics validity (its level from the verdict on the
+/// geometric-optics F, `go`) and the F method.
+pub(crate) fn wave_optics(w: f64, delta_t: f64, method: wave::Method, go: &ErrorEstimate) -> Vec<Flag> {
     let mut flags = Vec::new();
     // The interference phase wΔT (value, radians) is carried in f64: its absolute error is
     // ~1e-16·wΔT rad, 1e-6 rad at 1e10 and 1e-2 rad at 1e14.
@@ -85,11 +94,15 @@ pub(crate) fn wave_optics(w: f64, delta_t: f64, method: wave::Method) -> Vec<Fla
             "The interference phase wΔT exceeds what double precision resolves: the oscillating part of F (the phase of the faint image) is not meaningful, only its envelope.",
         ],
     ));
-    let level = geometric_optics_level(w);
-    let msg = match level {
-        Level::Ok => "w ≫ 1: geometric optics holds to ~1/w; the ray magnifications describe the signal.",
-        Level::Caution => "w of order 1–100: diffraction changes the amplification by ~1/w; use `amplification`, not the ray magnifications.",
-        Level::Invalid => "w < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1. The ray magnifications do not describe the signal.",
+    let level = Level::from(go.verdict);
+    let size = go.error_estimate.map(|e| format!("{e:.1e}")).unwrap_or_else(|| "unknown".into());
+    let msg = if w < 1.0 {
+        format!("w = {w:.3e} < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1; the geometric-optics F is {size} off (relative). Use `amplification`.")
+    } else {
+        match level {
+            Level::Ok => format!("w = {w:.3e}: geometric optics holds here; the geometric-optics F is within {size} of the exact F ({})", go.error_method),
+            _ => format!("w = {w:.3e}: diffraction matters; the geometric-optics F is {size} off ({}): use `amplification`, not the ray magnifications.", go.error_method),
+        }
     };
     flags.push(Flag::new(GEOMETRIC_OPTICS, level, Some(w), msg));
     let level = if method == wave::Method::GeometricOptics { Level::Caution } else { Level::Ok };

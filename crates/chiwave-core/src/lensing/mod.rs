@@ -21,6 +21,7 @@
 pub mod kummer;
 pub mod wave;
 
+mod accuracy;
 mod flags;
 mod request;
 mod results;

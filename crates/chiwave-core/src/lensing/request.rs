@@ -2,7 +2,7 @@
 //! evaluation.
 
 use super::results::{Image, LensResult};
-use super::{einstein_angle, flags, sources, wave, PointLens, REDSHIFT_MAX};
+use super::{accuracy, einstein_angle, flags, sources, wave, PointLens, REDSHIFT_MAX};
 use crate::error::InputError;
 use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
@@ -28,6 +28,9 @@ pub struct LensRequest {
     /// Lens redshift z_L, 0 ≤ z_L ≤ 1000 (the redshifted mass (1 + z_L) M enters w and the delay).
     #[serde(default)]
     pub lens_redshift: f64,
+    /// Relative tolerance of the verdicts, 1e-12 … 0.5 (default 1e-2).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub tolerance: Option<f64>,
 }
 
 impl LensRequest {
@@ -43,7 +46,7 @@ impl LensRequest {
     /// use chiwave_core::lensing::LensRequest;
     /// let r = LensRequest {
     ///     mass: "0.3Msun".into(), lens_distance: "4kpc".into(), source_distance: "8kpc".into(),
-    ///     offset: 0.5, frequency: None, lens_redshift: 0.0,
+    ///     offset: 0.5, frequency: None, lens_redshift: 0.0, tolerance: None,
     /// };
     /// let out = r.evaluate().unwrap();
     /// // θ_E = √(4GM D_LS/(c² D_L D_S)) (Einstein 1936) with IAU 2015 GM☉ and the IAU parsec,
@@ -52,6 +55,7 @@ impl LensRequest {
     /// assert!((out.einstein_radius_au / 2.21050038815609 - 1.0).abs() < 1e-12);
     /// ```
     pub fn evaluate(&self) -> Result<LensResult, InputError> {
+        let tol = crate::validity::tolerance(self.tolerance)?;
         let gm = match parse_mass("mass", &self.mass)? {
             Mass::Physical { gm } => gm,
             Mass::Geometric(_) => {
@@ -95,7 +99,9 @@ impl LensRequest {
         let delta_t = lens.time_delay();
         let time_delay_s = 4.0 * gm_z / (C * C * C) * delta_t;
 
-        let mut flags = flags::point_lens(theta, gm, r_e, z_l, lens.offset());
+        // Deflection at the Einstein ring, 4GM/(c² R_E): the thin-lens formulas are its first order.
+        let alpha_e = 4.0 * gm / (C * C) / r_e;
+        let mut flags = flags::point_lens(theta, alpha_e, z_l, lens.offset(), lens.total_magnification(), tol);
         let mut sources = BTreeMap::new();
         for k in ["einstein_radius_rad", "einstein_radius_mas", "einstein_radius_au", "einstein_radius_m"] {
             sources.insert(k, sources::SRC_EINSTEIN);
@@ -107,6 +113,8 @@ impl LensRequest {
         sources.insert("mass_msun", "IAU 2015 Resolution B3 nominal (GM)☉ (Prša et al. 2016, arXiv:1605.09788)");
 
         let mut result = LensResult {
+            best: crate::validity::Best::none("total_magnification", "not evaluated", tol),
+            tolerance: tol,
             einstein_radius_rad: theta,
             einstein_radius_mas: AngleUnit::Mas.from_rad(theta),
             einstein_radius_au: r_e / AU,
@@ -128,10 +136,12 @@ impl LensRequest {
             amplification_phase_rad: None,
             amplification_geometric: None,
             amplification_method: None,
+            estimates: crate::validity::Estimates::new(),
             flags: Vec::new(),
             sources,
         };
 
+        let mut wave_part = None;
         if let Some(f) = frequency {
             let w = wave::dimensionless_frequency(gm_z, f);
             if !(w.is_finite() && w <= wave::W_MAX) {
@@ -169,8 +179,14 @@ impl LensRequest {
             for k in ["w", "amplification", "amplification_abs", "amplification_phase_rad", "amplification_geometric"] {
                 result.sources.insert(k, sources::SRC_WAVE);
             }
-            flags.extend(flags::wave_optics(w, delta_t, a.method));
+            wave_part = Some(accuracy::Wave { w, f: a.value, geometric: geo, method: a.method });
         }
+        let (estimates, best) = accuracy::lens(lens.offset(), alpha_e, lens.total_magnification(), wave_part.as_ref(), tol);
+        if let Some(wv) = &wave_part {
+            flags.extend(flags::wave_optics(wv.w, delta_t, wv.method, &estimates["amplification_geometric"]));
+        }
+        result.estimates = estimates;
+        result.best = best;
         result.flags = flags;
         Ok(result)
     }

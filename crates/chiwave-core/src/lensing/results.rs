@@ -1,7 +1,7 @@
 //! The point-lens result (JSON keys are the stable CLI contract; fields serialise in the order
 //! written here).
 
-use crate::validity::Flag;
+use crate::validity::{Best, Estimates, Flag};
 use serde::Serialize;
 use std::collections::BTreeMap;
 
@@ -31,6 +31,11 @@ impl From<num_complex::Complex64> for ComplexValue {
 /// `time_delay_s`, `w` and `amplification` are the stable CLI contract.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct LensResult {
+    /// The recommended value: |F| (exact wave optics) when a frequency is given, else the
+    /// ray-optics total magnification, with its error estimate.
+    pub best: Best,
+    /// The relative tolerance the verdicts were judged against.
+    pub tolerance: f64,
     /// θ_E in radians.
     pub einstein_radius_rad: f64,
     /// θ_E in milliarcseconds.
@@ -74,6 +79,8 @@ pub struct LensResult {
     /// `"series"`, `"continuation"`, `"asymptotic"` (all exact) or `"geometric_optics"`.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub amplification_method: Option<&'static str>,
+    /// Error estimates of the magnification and amplification values, keyed by their JSON key.
+    pub estimates: Estimates,
     /// Regime flags.
     pub flags: Vec<Flag>,
     /// Output key → source of its formula.
