@@ -25,7 +25,7 @@ fn opt_f() -> impl Strategy<Value = Option<f64>> {
 
 fn request() -> impl Strategy<Value = EncounterRequest> {
     (prop_oneof![Just(Force::Gravity), Just(Force::Em)], opt_q(), opt_q(), opt_f(), opt_f(), opt_q(), opt_q(), opt_f(), opt_q(), opt_q())
-        .prop_map(|(force, m1, m2, nu, gamma, v, b, j, q1, q2)| EncounterRequest { force, m1, m2, nu, gamma, v, b, j, q1, q2 })
+        .prop_map(|(force, m1, m2, nu, gamma, v, b, j, q1, q2)| EncounterRequest { force, m1, m2, nu, gamma, v, b, j, q1, q2, tolerance: None })
 }
 
 fn finite_result(r: &EncounterResult) -> bool {

@@ -414,7 +414,7 @@ mod no_panic {
                 force: WaveformForce::Gravity, m1: Some(0.3.into()), m2: Some(0.7.into()), nu: None, total_mass: None,
                 gamma: Some(g), v: None, b: b.into(), theta: th, phi: ph, angle_unit: None, frame: Frame::Cm,
                 u_min: u0, u_max: u1, u_unit: Default::default(), samples: 3, distance: None, q1: None, q2: None, detector: None,
-                spectrum: None, energy_flux: false, quadrupole: true,
+                spectrum: None, energy_flux: false, quadrupole: true, tolerance: None,
             };
             if let Ok(res) = r.evaluate() {
                 let g = res.gravity().expect("gravity request gives a gravity result");
@@ -448,10 +448,16 @@ fn small_b_contract_example_works_and_is_flagged() {
             assert!((a - 100.0 * c).abs() < 1e-10 * a.abs().max(1e-3 * r.h_plus.iter().fold(0.0f64, |m, x| m.max(x.abs()))), "i={i}: {a} vs {}", 100.0 * c); // exact homogeneity up to the x-quadrature, relative to the value or 1e-3 of the peak near zeros
         }
     }
-    // Levels: caution between 3√3 and 50 GM/c², ok above.
+    // Levels: caution between 3√3 and 50 GM/c²; above, never better than weak_deflection (here
+    // χ₁ = 2(2γ² − 1)h/(b(γ² − 1)) = 0.057 at b = 100, γ = 2, h = √1.5: a caution at the default
+    // tolerance 1e-2), and ok once the deflection is small too (b = 1e4: χ₁ = 5.7e-4).
+    let level = |r: &GravityWaveformResult, k: &str| r.flags.iter().find(|f| f.key == k).unwrap().level;
     let mid = request(r#"{"m1":1,"m2":1,"gamma":2,"b":20,"theta":1.1,"phi":0.4,"u_min":-5,"u_max":5,"samples":3,"energy_flux":false}"#).unwrap();
-    assert_eq!(mid.flags.iter().find(|f| f.key == "b_weak_field").unwrap().level, chiwave_core::validity::Level::Caution);
-    assert_eq!(big.flags.iter().find(|f| f.key == "b_weak_field").unwrap().level, chiwave_core::validity::Level::Ok);
+    assert_eq!(level(&mid, "b_weak_field"), chiwave_core::validity::Level::Caution);
+    assert_eq!(level(&big, "weak_deflection"), chiwave_core::validity::Level::Caution);
+    assert_eq!(level(&big, "b_weak_field"), chiwave_core::validity::Level::Caution);
+    let far = request(r#"{"m1":1,"m2":1,"gamma":2,"b":1e4,"theta":1.1,"phi":0.4,"u_min":-5,"u_max":5,"samples":3,"energy_flux":false}"#).unwrap();
+    assert_eq!(level(&far, "b_weak_field"), chiwave_core::validity::Level::Ok);
 }
 
 fn em_request(json: &str) -> Result<EmWaveformResult, chiwave_core::InputError> {

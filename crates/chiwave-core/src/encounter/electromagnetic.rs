@@ -2,16 +2,25 @@
 //! exact test-charge angle, radiated energy and angular momentum, impulse, flags, SI values.
 
 use super::results::{order_rows, EmPhysical, EmResult, PlAngles, PlCoefficients};
-use super::{flags, impulse, pl, sources};
+use super::{accuracy, flags, impulse, pl, sources};
 use crate::error::InputError;
 use crate::two_body::TwoBodySystem;
 use crate::units;
 
-/// Evaluates a validated electromagnetic encounter (Gaussian units, c = 1).
+/// Evaluates a validated electromagnetic encounter (Gaussian units, c = 1; verdicts at the
+/// default tolerance).
 ///
 /// # Errors
 /// [`InputError::Missing`] if the setup carries no charges.
 pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
+    evaluate(s, crate::validity::DEFAULT_TOLERANCE)
+}
+
+/// Evaluates a validated electromagnetic encounter with verdicts at the relative tolerance `tol`.
+///
+/// # Errors
+/// [`InputError::Missing`] if the setup carries no charges.
+pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<EmResult, InputError> {
     let (q1, q2) = s.charges.ok_or_else(|| InputError::Missing { field: "q1", hint: "force \"em\" needs q1 and q2".into() })?;
     let k = &s.kin;
     let b = &k.speed;
@@ -40,8 +49,15 @@ pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
     let cov = impulse::Covariant { c_b: t1 + t2 + t3, c_u1: -kk * (b.gamma * k.m1 + k.m2), c_u2: kk * (b.gamma * k.m2 + k.m1) };
     let inp = impulse::ImpulseInput::new(k, [0.0; 4], 0.0);
     let imp = impulse::frames(&cov, &inp);
-    let orders = order_rows(&["1PL", "2PL", "3PL conservative (test charge)", "3PL radiation reaction"], &terms);
-    let mut flags = flags::electromagnetic(k, kappa, fall);
+    let mut orders = order_rows(&["1PL", "2PL", "3PL conservative (test charge)", "3PL radiation reaction"], &terms);
+    let acc = accuracy::electromagnetic(
+        &accuracy::EmInputs { k, kappa, terms, cumulative: [a1, a2, a3c, a3], chi_test_exact, charges: (q1, q2) },
+        tol,
+    );
+    for (row, e) in orders.iter_mut().zip(&acc.orders) {
+        row.estimate = e.clone();
+    }
+    let mut flags = flags::electromagnetic(k, kappa, fall, &orders[3].estimate);
     let physical = s.physical.map(|sc| {
         use units::codata2018::{C, EPSILON0, G, HBAR};
         let e_unit = sc.m_kg * C * C;
@@ -68,6 +84,8 @@ pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
     }
     Ok(EmResult {
         force: "em",
+        best: acc.best,
+        tolerance: tol,
         units: "Gaussian, c = 1",
         gamma: b.gamma,
         nu: k.nu,
@@ -84,6 +102,7 @@ pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
         coefficients: PlCoefficients { e1, e2, e3_test: e3, delta_chi_rr: rr },
         kinematics: *k,
         orders,
+        estimates: acc.estimates,
         flags,
         sources: sources::electromagnetic(),
         physical,

@@ -3,7 +3,7 @@
 
 use crate::error::InputError;
 use crate::two_body::Kinematics;
-use crate::validity::{Check, Flag, Level};
+use crate::validity::{Check, ErrorEstimate, Flag, Level};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const STRONG_FIELD_ESTIMATE: Check = Check::new("strong_field_estimate", "strong-field estimate");
@@ -25,29 +25,66 @@ pub(crate) fn estimate_unavailable(err: &InputError) -> Flag {
     Flag::new(STRONG_FIELD_ESTIMATE, Level::Caution, None, format!("Strong-field estimate unavailable: {err}."))
 }
 
-/// Flags of the PM series: expansion parameter, distance from capture, speed, energy, truncation.
-/// `j_c` is the test-body capture threshold, `pm3_share` the 3PM term over χ.
-pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share: f64) {
+/// The strong-field estimate's own flags (from [`super::eob::details`]) with the `eob_estimate`
+/// flag graded by the estimate's own error estimate `est` (the one verdict rule).
+pub(crate) fn estimate_flags(mut eob_flags: Vec<Flag>, est: &ErrorEstimate) -> Vec<Flag> {
+    for f in eob_flags.iter_mut().filter(|f| f.key == "eob_estimate") {
+        f.level = Level::from(est.verdict);
+        f.value = est.error_estimate;
+        f.message = match est.error_estimate {
+            Some(e) => format!(
+                "Strong-field estimate (PM angle coefficients resummed into an effective-one-body radial potential, Damour 2018; Damour & Rettegno 2023): estimated relative error {e:.1e} ({}).",
+                est.error_method
+            ),
+            None => format!(
+                "Strong-field estimate (PM angle coefficients resummed into an effective-one-body radial potential, Damour 2018; Damour & Rettegno 2023): no error estimate ({}).",
+                est.error_reason.as_deref().unwrap_or("unknown")
+            ),
+        };
+    }
+    eob_flags
+}
+
+/// Relative error shown in a message.
+fn rel(e: &ErrorEstimate) -> String {
+    match e.error_estimate {
+        Some(x) => format!("{x:.1e} ({})", e.error_method),
+        None => format!("not estimated ({})", e.error_reason.as_deref().unwrap_or("unknown")),
+    }
+}
+
+/// Flags of the PM series: expansion parameter, distance from the test-body capture, speed,
+/// energy, truncation. `j_c` is the test-body capture threshold, `pm3_share` the 3PM term over χ,
+/// `est3` the error estimate of the 3PM value: `pm_parameter` and `pm_truncation` take their
+/// level from its verdict, so they never disagree with the angle table.
+pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share: f64, est3: &ErrorEstimate) {
     let s = &k.speed;
     let pm_x = 1.0 / (k.b_over_gm * s.v * s.v);
-    flags.push(Flag::small_parameter(
+    let level = Level::from(est3.verdict);
+    flags.push(Flag::new(
         PM_PARAMETER,
-        pm_x,
-        0.05,
-        0.3,
-        [
-            "GM/(b v²) small: weak deflection, the PM series converges quickly.",
-            "GM/(b v²) not small: higher PM orders matter; compare with the exact test-body and estimate values.",
-            "GM/(b v²) large: strong deflection; the truncated PM series is not a prediction here.",
-        ],
+        level,
+        Some(pm_x),
+        match level {
+            Level::Ok => format!("GM/(b v²) = {pm_x:.3}: the PM series converges quickly here; the 3PM value's estimated error is {}.", rel(est3)),
+            _ => format!("GM/(b v²) = {pm_x:.3}: the 3PM value's estimated error is {}; compare with the exact test-body angle and the strong-field estimate.", rel(est3)),
+        },
     ));
     let ratio = k.j / j_c;
     flags.push(if ratio <= 1.0 {
-        Flag::new(CAPTURE_PROXIMITY, Level::Invalid, Some(ratio), "Below the test-body capture threshold (j ≤ j_c): a test body would be captured; PM numbers have no meaning.")
+        // In the test-body limit this is the capture of the encounter itself; for comparable
+        // masses the two-body capture threshold is lower (see eob_near_capture).
+        let level = if k.nu < 0.01 { Level::Invalid } else { Level::Caution };
+        Flag::new(
+            CAPTURE_PROXIMITY,
+            level,
+            Some(ratio),
+            format!("j/j_c = {ratio:.4}: a test body (ν → 0) at this γ would be captured (j ≤ j_c), so the exact test-body angle is not available; for ν = {:.3} the two-body capture threshold differs (see the strong-field estimate).", k.nu),
+        )
     } else if ratio < 2.0 {
-        Flag::new(CAPTURE_PROXIMITY, Level::Caution, Some(ratio), "Within a factor 2 of the test-body capture threshold j_c: strong field, PM series unreliable.")
+        Flag::new(CAPTURE_PROXIMITY, Level::Caution, Some(ratio), format!("j/j_c = {ratio:.4}: within a factor 2 of the test-body capture threshold: strong field; read each angle's error estimate."))
     } else {
-        Flag::new(CAPTURE_PROXIMITY, Level::Ok, Some(ratio), "Far from the test-body capture threshold (j > 2 j_c).")
+        Flag::new(CAPTURE_PROXIMITY, Level::Ok, Some(ratio), format!("j/j_c = {ratio:.3}: far from the test-body capture threshold (j > 2 j_c)."))
     });
     flags.push(velocity(s.v));
     flags.push(if s.gamma > 10.0 {
@@ -55,34 +92,29 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
     } else {
         Flag::new(HIGH_ENERGY, Level::Ok, Some(s.gamma), "γ ≤ 10: conservative and radiation-reacted 3PM both shown; the radiation-reacted one (key 3pm) is the physical value.")
     });
-    flags.push(Flag::small_parameter(
+    flags.push(Flag::new(
         PM_TRUNCATION,
-        pm3_share,
-        1e-3,
-        0.1,
-        [
-            "The 3PM term is a small fraction of χ: truncation error is small.",
-            "The 3PM term is a sizeable fraction of χ: unknown 4PM terms may change the angle noticeably.",
-            "The 3PM term is comparable with χ: the series is not converging here.",
-        ],
+        level,
+        Some(pm3_share),
+        format!("The 3PM term is {:.1e} of χ; the 3PM value's estimated error is {}.", pm3_share, rel(est3)),
     ));
 }
 
 /// Flags of the PL series (Gaussian units): units, expansion parameter, fall to the centre,
 /// speed, the omitted two-body 3PL part, the dipole formula's speed.
-pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool) -> Vec<Flag> {
+pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool, est3: &ErrorEstimate) -> Vec<Flag> {
     let s = &k.speed;
     let mut flags = vec![Flag::new(UNITS, Level::Ok, None, "Gaussian units with c = 1 (Coulomb force q1 q2/r²); SI charges were converted with q1 q2 → q1 q2/(4π ε0).")];
-    flags.push(Flag::small_parameter(
+    let x = kappa.abs() / s.p_inf;
+    let level = Level::from(est3.verdict);
+    flags.push(Flag::new(
         PL_PARAMETER,
-        kappa.abs() / s.p_inf,
-        0.05,
-        0.3,
-        [
-            "|q1 q2|/(J p∞) small: weak deflection, the PL series converges quickly.",
-            "|q1 q2|/(J p∞) not small: compare the PL series with the exact Darwin angle.",
-            "|q1 q2|/(J p∞) large: strong deflection; use the exact test-charge angle.",
-        ],
+        level,
+        Some(x),
+        match level {
+            Level::Ok => format!("|q1 q2|/(J p∞) = {x:.3}: the PL series converges quickly here; the 3PL value's estimated error is {}.", rel(est3)),
+            _ => format!("|q1 q2|/(J p∞) = {x:.3}: the 3PL value's estimated error is {}; compare with the exact test-charge angle.", rel(est3)),
+        },
     ));
     flags.push(if fall {
         Flag::new(FALL_TO_CENTRE, Level::Invalid, Some(kappa), "Attraction with |κ| ≥ 1: the test charge falls to the centre (no scattering angle).")

@@ -2,16 +2,24 @@
 //! strong-field estimate, radiation, impulse, flags and SI values.
 
 use super::results::{order_rows, GravityPhysical, GravityResult, PmAngles, PmCoefficients, TestBodyTerm};
-use super::{eob, flags, impulse, pm, radiated, sources, testbody};
+use super::{accuracy, eob, flags, impulse, pm, radiated, sources, testbody};
 use crate::error::InputError;
 use crate::two_body::TwoBodySystem;
 use crate::units;
 
-/// Evaluates a validated gravitational encounter.
+/// Evaluates a validated gravitational encounter (verdicts at the default tolerance).
 ///
 /// # Errors
 /// [`InputError::NoConvergence`] from the test-body quadrature self-check.
 pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
+    evaluate(s, crate::validity::DEFAULT_TOLERANCE)
+}
+
+/// Evaluates a validated gravitational encounter with verdicts at the relative tolerance `tol`.
+///
+/// # Errors
+/// [`InputError::NoConvergence`] from the test-body quadrature self-check.
+pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<GravityResult, InputError> {
     let k = &s.kin;
     let b = &k.speed;
     let c = pm::coefficients(b, k.nu);
@@ -24,17 +32,22 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
     };
     let j_c = testbody::critical_j(b);
     let chi_for_estimate = [c[0], c[1], c[2] + c[3]];
-    let mut flags = Vec::new();
+    let mut eob_flags = Vec::new();
+    let mut estimate_missing = None;
     let (chi_estimate, captured, estimate, j_critical_estimate) = match eob::details(b.gamma, k.nu, k.j, &chi_for_estimate) {
         Ok(d) => {
-            flags.extend(d.flags);
+            eob_flags = d.flags;
             match d.estimate {
                 e @ eob::Estimate::Scattered { chi, .. } => (Some(chi), false, Some(e), d.j_critical),
-                e @ eob::Estimate::Captured { .. } => (None, true, Some(e), d.j_critical),
+                e @ eob::Estimate::Captured { j_critical } => {
+                    estimate_missing = Some(format!("the strong-field estimate predicts capture (j = {:.4} below its critical j = {j_critical:.4})", k.j));
+                    (None, true, Some(e), d.j_critical)
+                }
             }
         }
         Err(err) => {
-            flags.push(flags::estimate_unavailable(&err));
+            estimate_missing = Some(format!("strong-field estimate unavailable: {err}"));
+            eob_flags.push(flags::estimate_unavailable(&err));
             (None, false, None, None)
         }
     };
@@ -59,9 +72,18 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
         .collect();
     let x = 1.0 / k.j;
     let terms = [2.0 * c[0] * x, 2.0 * c[1] * x * x, 2.0 * c[2] * x.powi(3), 2.0 * c[3] * x.powi(3)];
-    let orders = order_rows(&["1PM", "2PM", "3PM conservative", "3PM radiation reaction"], &terms);
+    let mut orders = order_rows(&["1PM", "2PM", "3PM conservative", "3PM radiation reaction"], &terms);
+    let acc = accuracy::gravity(
+        &accuracy::GravityInputs { k, c, angles, chi_newtonian, chi_test_body, chi_estimate, estimate_missing },
+        tol,
+    );
+    for (row, e) in orders.iter_mut().zip(&acc.orders) {
+        row.estimate = e.clone();
+    }
     let pm3_share = (terms[2] + terms[3]).abs() / angles[3].abs().max(f64::MIN_POSITIVE);
-    flags::gravity(&mut flags, k, j_c, pm3_share);
+    let mut flags = Vec::new();
+    flags::gravity(&mut flags, k, j_c, pm3_share, &orders[3].estimate);
+    flags.extend(flags::estimate_flags(eob_flags, &acc.estimates["chi_estimate"]));
     let physical = s.physical.map(|sc| {
         use units::codata2018::{C, HBAR};
         let mc = sc.m_kg * C;
@@ -91,6 +113,8 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
     }
     Ok(GravityResult {
         force: "gravity",
+        best: acc.best,
+        tolerance: tol,
         gamma: b.gamma,
         nu: k.nu,
         j: k.j,
@@ -116,6 +140,7 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
         test_body_pm,
         kinematics: *k,
         orders,
+        estimates: acc.estimates,
         flags,
         sources: sources::gravity(),
         physical,

@@ -34,6 +34,7 @@
 // `!(x > 0.0)` is deliberate throughout: unlike `x <= 0.0` it also rejects NaN.
 #![allow(clippy::neg_cmp_op_on_partial_ord)]
 
+pub mod accuracy;
 pub mod capture;
 mod electromagnetic;
 pub mod eob;

@@ -46,6 +46,9 @@ pub struct EncounterRequest {
     pub q1: Option<Quantity>,
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub q2: Option<Quantity>,
+    /// Relative tolerance of the verdicts, 1e-12 … 0.5 (default 1e-2).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub tolerance: Option<f64>,
 }
 
 /// The former name of the validated system ([`TwoBodySystem`]).
@@ -113,10 +116,11 @@ impl EncounterRequest {
     /// assert!((r.chi.pm1 - 7.0 / (1.25f64.sqrt() * 100.0)).abs() < 1e-15);
     /// ```
     pub fn evaluate(&self) -> Result<EncounterResult, InputError> {
+        let tol = crate::validity::tolerance(self.tolerance)?;
         let s = self.setup()?;
         Ok(match self.force {
-            Force::Gravity => EncounterResult::Gravity(Box::new(super::gravity(&s)?)),
-            Force::Em => EncounterResult::Em(Box::new(super::electromagnetic(&s)?)),
+            Force::Gravity => EncounterResult::Gravity(Box::new(super::gravity::evaluate(&s, tol)?)),
+            Force::Em => EncounterResult::Em(Box::new(super::electromagnetic::evaluate(&s, tol)?)),
         })
     }
 }

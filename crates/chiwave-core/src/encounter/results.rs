@@ -3,7 +3,7 @@
 
 use super::{eob, impulse};
 use crate::two_body::Kinematics;
-use crate::validity::Flag;
+use crate::validity::{Best, ErrorEstimate, Estimates, Flag};
 use serde::Serialize;
 use std::collections::BTreeMap;
 
@@ -49,6 +49,10 @@ pub struct OrderRow {
     pub share_of_total: f64,
     /// term / (cumulative before this row); null for the first row.
     pub relative_change: Option<f64>,
+    /// The error estimate of `cumulative` against the two-body angle, and its verdict (JSON
+    /// keys `error_estimate`, `error_method`, `error_reason`, `verdict`).
+    #[serde(flatten)]
+    pub estimate: ErrorEstimate,
 }
 
 /// The order-by-order table of the cumulative series with terms `terms`.
@@ -68,6 +72,7 @@ pub(crate) fn order_rows(labels: &[&'static str], terms: &[f64]) -> Vec<OrderRow
                 cumulative: cum,
                 share_of_total: if total != 0.0 { t / total } else { 0.0 },
                 relative_change: if i == 0 || prev == 0.0 { None } else { Some(t / prev) },
+                estimate: ErrorEstimate::none("not estimated", "", crate::validity::DEFAULT_TOLERANCE),
             }
         })
         .collect()
@@ -113,6 +118,11 @@ pub struct GravityPhysical {
 pub struct GravityResult {
     /// `"gravity"`.
     pub force: &'static str,
+    /// The recommended angle (key `chi.3pm`, `chi.2pm`, `chi.1pm`, `chi_test_body` or
+    /// `chi_estimate`) with its error estimate, or null with the reason.
+    pub best: Best,
+    /// The relative tolerance the verdicts were judged against.
+    pub tolerance: f64,
     pub gamma: f64,
     pub nu: f64,
     pub j: f64,
@@ -153,6 +163,8 @@ pub struct GravityResult {
     pub test_body_pm: Vec<TestBodyTerm>,
     pub kinematics: Kinematics,
     pub orders: Vec<OrderRow>,
+    /// Error estimates of `chi_newtonian`, `chi_test_body`, `chi_estimate`, `e_rad`, `j_rad`.
+    pub estimates: Estimates,
     pub flags: Vec<Flag>,
     pub sources: BTreeMap<&'static str, &'static str>,
     pub physical: Option<GravityPhysical>,
@@ -205,6 +217,11 @@ pub struct EmPhysical {
 pub struct EmResult {
     /// `"em"`.
     pub force: &'static str,
+    /// The recommended angle (key `chi.3pl`, `chi.2pl`, `chi.1pl` or `chi_test_exact`) with its
+    /// error estimate, or null with the reason.
+    pub best: Best,
+    /// The relative tolerance the verdicts were judged against.
+    pub tolerance: f64,
     /// `"Gaussian, c = 1"`.
     pub units: &'static str,
     pub gamma: f64,
@@ -228,6 +245,8 @@ pub struct EmResult {
     pub coefficients: PlCoefficients,
     pub kinematics: Kinematics,
     pub orders: Vec<OrderRow>,
+    /// Error estimates of `chi_test_exact`, `e_rad`, `e_rad_dipole`, `j_rad`.
+    pub estimates: Estimates,
     pub flags: Vec<Flag>,
     pub sources: BTreeMap<&'static str, &'static str>,
     pub physical: Option<EmPhysical>,

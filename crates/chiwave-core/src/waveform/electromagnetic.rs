@@ -8,7 +8,7 @@ use super::gravity::mc2_joules;
 use super::request::{WaveformForce, WaveformRequest};
 use super::results::{EmSpectrumResult, EmWaveformPhysical, EmWaveformResult, ThetaPhi, EM_UNITS};
 use super::validate::Validated;
-use super::{flags, sources};
+use super::{accuracy, flags, sources};
 use crate::error::InputError;
 
 /// Evaluates a validated electromagnetic request (frame A only).
@@ -57,7 +57,15 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
             })
         }
     };
-    let flags = flags::electromagnetic(&sys, energies.as_ref());
+    let flags = flags::electromagnetic(&sys, energies.as_ref(), c.tolerance);
+    let peak_abs_e = f.e_theta.iter().zip(&f.e_phi).map(|(a, b)| a.hypot(*b)).fold(0.0, f64::max);
+    let (estimates, best, best_e_rad) = accuracy::electromagnetic(
+        flags::em_deflection_parameter(&sys),
+        peak_abs_e,
+        e1 + e2,
+        energies.as_ref().map(|e| (e.total_flux, e.rel_error_estimate)),
+        c.tolerance,
+    );
     let physical = c.mass_length_m().map(|l| {
         let cc = crate::units::codata2018::C;
         let mc2 = mc2_joules(l);
@@ -72,9 +80,13 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
     });
     Ok(EmWaveformResult {
         force: WaveformForce::Em,
+        best,
+        best_e_rad,
+        tolerance: c.tolerance,
         u: c.u.clone(),
         e_theta: f.e_theta,
         e_phi: f.e_phi,
+        peak_abs_e,
         memory: ThetaPhi { theta: mem[0], phi: mem[1] },
         e_rad_flux: energies.as_ref().map(|e| e.total_flux),
         e_rad_closed: e1 + e2,
@@ -98,5 +110,6 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
         sources: sources::electromagnetic(),
         spectrum,
         physical,
+        estimates,
     })
 }

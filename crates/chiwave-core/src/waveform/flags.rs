@@ -3,8 +3,7 @@
 
 use super::em::{EmEnergies, EmSystem};
 use super::frames::Binary;
-use crate::encounter::pm;
-use crate::validity::{Check, Flag, Level};
+use crate::validity::{verdict, Check, ErrorEstimate, Flag, Level};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const F_CHAR_RULE: Check = Check::new("f_char_rule", "f_char rule of thumb");
@@ -25,20 +24,24 @@ const B_INVALID: f64 = 5.196_152_422_706_632;
 const B_CAUTION: f64 = 50.0;
 
 /// Flags of the gravitational LO waveform: b against the strong field, the size of the LO
-/// deflection, the f_char rule of thumb, and the sky rule of the flux integral above γ = 3.
-pub(crate) fn gravity(sys: &Binary, b_over_gm: f64, energy_flux: bool) -> Vec<Flag> {
+/// deflection (its level the verdict on the LO strain's error estimate `peak`, which is χ₁), the
+/// f_char rule of thumb, and the sky rule of the flux integral above γ = 3. `b_weak_field` is
+/// never better than `weak_deflection`: a weak field at b does not make the LO waveform hold when
+/// the speed is low enough for a large deflection.
+pub(crate) fn gravity(sys: &Binary, b_over_gm: f64, energy_flux: bool, chi1: f64, peak: &ErrorEstimate) -> Vec<Flag> {
     let gamma = sys.gamma;
-    let mut flags = vec![b_weak_field(b_over_gm)];
-    flags.push(Flag::small_parameter(
+    let deflection_level = Level::from(peak.verdict);
+    let mut flags = vec![b_weak_field(b_over_gm, chi1, deflection_level)];
+    let size = peak.error_estimate.map(|e| format!("{e:.2e}")).unwrap_or_else(|| "unknown".into());
+    flags.push(Flag::new(
         WEAK_DEFLECTION,
-        pm::chi_1pm_at_b(gamma, sys.cm_energy_ratio(), b_over_gm),
-        0.05,
-        0.3,
-        [
-            "LO deflection angle small: the leading-order waveform is a good approximation.",
-            "LO deflection angle not small: higher PM orders change the waveform at the tens-of-percent level.",
-            "Deflection angle large (or capture): the leading-order waveform does not apply.",
-        ],
+        deflection_level,
+        Some(chi1),
+        match deflection_level {
+            Level::Ok => format!("LO deflection angle χ₁ = {chi1:.3e} rad: the leading-order waveform (first order in the deflection) misses relative corrections of about {size}."),
+            _ if chi1 < 1.0 => format!("LO deflection angle χ₁ = {chi1:.3e} rad is not small: the leading-order waveform misses relative corrections of about {size} (at v ≪ c the quadrupole waveform of the Newtonian hyperbola, figure slow_motion, holds to about v)."),
+            _ => format!("Deflection angle χ₁ = {chi1:.3e} rad is large (or the bodies are captured): the leading-order waveform does not apply."),
+        },
     ));
     let v = sys.v();
     flags.push(Flag::new(
@@ -58,44 +61,55 @@ pub(crate) fn gravity(sys: &Binary, b_over_gm: f64, energy_flux: bool) -> Vec<Fl
     flags
 }
 
-/// The validity flag on b for the gravitational LO waveform (thresholds at [`B_INVALID`], [`B_CAUTION`]).
-fn b_weak_field(b_over_m: f64) -> Flag {
+/// The validity flag on b for the gravitational LO waveform (thresholds at [`B_INVALID`],
+/// [`B_CAUTION`]), never better than the deflection's level `deflection`.
+fn b_weak_field(b_over_m: f64, chi1: f64, deflection: Level) -> Flag {
     let (level, msg) = if b_over_m < B_INVALID {
         (
             Level::Invalid,
-            "b is below 3√3 GM/c² (the photon-capture impact parameter): the leading-order (weak-deflection) waveform is not a prediction here; the numbers only show the homogeneous O(G²) formula (D·h in units of GM/c², scaling as 1/b)",
+            "b is below 3√3 GM/c² (the photon-capture impact parameter): the leading-order (weak-deflection) waveform is not a prediction here; the numbers only show the homogeneous O(G²) formula (D·h in units of GM/c², scaling as 1/b)".to_string(),
         )
     } else if b_over_m < B_CAUTION {
         (
             Level::Caution,
-            "b is only a few tens of GM/c² or less: the leading-order (weak-deflection) waveform misses corrections of relative size ~GM/(c² b) and larger; treat it as indicative",
+            "b is only a few tens of GM/c² or less: the leading-order (weak-deflection) waveform misses corrections of relative size ~GM/(c² b) and larger; treat it as indicative".to_string(),
         )
+    } else if deflection == Level::Ok {
+        (Level::Ok, format!("b = {b_over_m:.3e} GM/c² ≫ GM/c² and the deflection χ₁ = {chi1:.2e} rad is small: the weak-deflection expansion of the waveform applies"))
     } else {
-        (Level::Ok, "b ≫ GM/c²: the weak-deflection expansion of the waveform applies")
+        (
+            deflection,
+            format!("b = {b_over_m:.3e} GM/c² ≫ GM/c², so the field along the orbit is weak, but at this speed the deflection χ₁ = {chi1:.2e} rad is not small: the weak-deflection expansion is limited by it (see weak_deflection)"),
+        )
     };
     Flag::new(B_WEAK_FIELD, level, Some(b_over_m), msg)
 }
 
-/// Flags of the straight-line (first-order) electromagnetic field.
-///
-/// `em_deflection`: the larger of body 1's deflection angle Δp/(γ m1 v) and body 2's recoil
-/// speed relative to v, Δp/(m2 v); Ok below 0.01, Caution below 0.1 (common practice, no
-/// source). `em_beaming`: γ, Caution above 100 (the radiation is confined to ~1/γ).
-pub(crate) fn em_system(sys: &EmSystem) -> Vec<Flag> {
+/// The larger of body 1's deflection angle Δp/(γ m1 v) and body 2's recoil speed relative to v,
+/// Δp/(m2 v): the relative size of the corrections to the straight-line field.
+pub(crate) fn em_deflection_parameter(sys: &EmSystem) -> f64 {
     let v = sys.v();
     let dp = sys.impulse().abs();
-    let x = (dp / (sys.gamma * sys.m1 * v)).max(dp / (sys.m2 * v));
+    (dp / (sys.gamma * sys.m1 * v)).max(dp / (sys.m2 * v))
+}
+
+/// Flags of the straight-line (first-order) electromagnetic field.
+///
+/// `em_deflection`: [`em_deflection_parameter`], graded by the one verdict rule at the
+/// tolerance `tol`. `em_beaming`: γ, Caution above 100 (the radiation is confined to ~1/γ).
+pub(crate) fn em_system(sys: &EmSystem, tol: f64) -> Vec<Flag> {
+    let x = em_deflection_parameter(sys);
+    let level = Level::from(verdict(Some(x), tol));
     vec![
-        Flag::small_parameter(
+        Flag::new(
             EM_DEFLECTION,
-            x,
-            0.01,
-            0.1,
-            [
-                "deflection and recoil are small: the straight-line O(q1 q2) field applies",
-                "deflection or recoil of a few per cent: expect corrections of that relative size",
-                "deflection or recoil is not small: the straight-line approximation fails",
-            ],
+            level,
+            Some(x),
+            match level {
+                Level::Ok => format!("deflection and recoil {x:.2e} are small: the straight-line O(q1 q2) field applies to about this relative size"),
+                Level::Caution => format!("deflection or recoil {x:.2e}: expect corrections of that relative size to the straight-line field"),
+                Level::Invalid => format!("deflection or recoil {x:.2e} is not small: the straight-line approximation fails"),
+            },
         ),
         Flag::small_parameter(
             EM_BEAMING,
@@ -113,8 +127,8 @@ pub(crate) fn em_system(sys: &EmSystem) -> Vec<Flag> {
 
 /// Flags of the electromagnetic waveform result: the straight-line field ([`em_system`]), the
 /// neglected gravity, the unit system, and the flux integral's error estimate.
-pub(crate) fn electromagnetic(sys: &EmSystem, energies: Option<&EmEnergies>) -> Vec<Flag> {
-    let mut flags = em_system(sys);
+pub(crate) fn electromagnetic(sys: &EmSystem, energies: Option<&EmEnergies>, tol: f64) -> Vec<Flag> {
+    let mut flags = em_system(sys, tol);
     // Gravity between the bodies is left out of this force law: compare the couplings.
     let g_over_q = sys.m1 * sys.m2 / (sys.q1 * sys.q2).abs();
     flags.push(Flag::small_parameter(

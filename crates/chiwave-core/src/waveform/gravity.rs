@@ -14,7 +14,7 @@ use super::request::{SpectrumOptions, WaveformRequest};
 use super::results::{DetectorResult, GravityWaveformPhysical, GravityWaveformResult, MemoryPair, QuadrupoleResult, SpectrumResult};
 use super::spectrum::spectrum_angle_integrated;
 use super::validate::Validated;
-use super::{flags, sources};
+use super::{accuracy, flags, sources};
 use crate::error::{finite, InputError};
 use crate::units::{parse_length, Length};
 
@@ -72,7 +72,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
     let constant: MemoryPair = constant_piece(&sys, req.frame, theta, phi)?.into();
 
     let v = sys.v();
-    let flags = flags::gravity(&sys, b_over_m, req.energy_flux);
+    let chi1 = crate::encounter::pm::chi_1pm_at_b(gamma, sys.cm_energy_ratio(), b_over_m);
     // Physical values.
     let physical = match l_tot {
         Some(l) => {
@@ -131,7 +131,14 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
         None
     };
     let peak_abs_h = h_plus.iter().zip(&h_cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max);
+    let cm_equal = req.frame == Frame::Cm && (sys.m1 - sys.m2).abs() <= 1e-12 * sys.total_mass();
+    let (estimates, best, best_e_rad) =
+        accuracy::gravity(chi1, peak_abs_h, closed.energy, e_flux, quadrupole.as_ref().map(|_| (v, cm_equal)), c.tolerance);
+    let flags = flags::gravity(&sys, b_over_m, req.energy_flux, chi1, &estimates["peak_abs_h"]);
     Ok(GravityWaveformResult {
+        best,
+        best_e_rad,
+        tolerance: c.tolerance,
         u,
         peak_abs_h,
         h_plus,
@@ -157,6 +164,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
         spectrum,
         detector,
         quadrupole,
+        estimates,
     })
 }
 

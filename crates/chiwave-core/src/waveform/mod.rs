@@ -52,6 +52,7 @@
 //! The electromagnetic analogue (two charges, Gaussian units, frame A) is in [`em`]; a request with
 //! `force: "em"` returns an [`EmWaveformResult`].
 
+pub mod accuracy;
 pub mod em;
 mod electromagnetic;
 mod energy;

@@ -144,6 +144,9 @@ pub struct WaveformRequest {
     /// Also return the quadrupole-formula waveform of the Newtonian hyperbola (default false).
     #[serde(default)]
     pub quadrupole: bool,
+    /// Relative tolerance of the verdicts, 1e-12 … 0.5 (default 1e-2).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub tolerance: Option<f64>,
 }
 
 /// A validated gravitational request reduced to what the sky sums need

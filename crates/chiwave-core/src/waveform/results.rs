@@ -13,7 +13,7 @@
 use super::frames::Frame;
 use super::observer::PhysicalScales;
 use super::request::WaveformForce;
-use crate::validity::Flag;
+use crate::validity::{Best, Estimates, Flag};
 use serde::Serialize;
 use std::collections::BTreeMap;
 
@@ -108,6 +108,12 @@ impl WaveformResult {
 /// Gravitational waveform result (JSON keys are the CLI contract).
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct GravityWaveformResult {
+    /// The recommended strain value: the peak `peak_abs_h` with its error estimate.
+    pub best: Best,
+    /// The recommended radiated energy: `e_rad_closed` with its error estimate.
+    pub best_e_rad: Best,
+    /// The relative tolerance the verdicts were judged against.
+    pub tolerance: f64,
     /// Retarded times, units of GM/c³.
     pub u: Vec<f64>,
     /// D·h₊/(GM/c²), O(G²) part.
@@ -152,6 +158,9 @@ pub struct GravityWaveformResult {
     pub detector: Option<DetectorResult>,
     /// Quadrupole-formula waveform of the Newtonian hyperbola (same u), if asked.
     pub quadrupole: Option<QuadrupoleResult>,
+    /// Error estimates of `peak_abs_h`, `e_rad_closed`, `e_rad_flux` and `quadrupole` (when
+    /// present), keyed by their JSON key.
+    pub estimates: Estimates,
 }
 
 /// The slow-motion comparison curve.
@@ -203,12 +212,21 @@ pub struct EmWaveformPhysical {
 pub struct EmWaveformResult {
     /// Always "em".
     pub force: WaveformForce,
+    /// The recommended field value: the peak `peak_abs_e` with its error estimate.
+    pub best: Best,
+    /// The recommended radiated energy: `e_rad_flux` (with interference) when computed, else
+    /// `e_rad_closed`, with its error estimate.
+    pub best_e_rad: Best,
+    /// The relative tolerance the verdicts were judged against.
+    pub tolerance: f64,
     /// Retarded times, units of GM/c³.
     pub u: Vec<f64>,
     /// D·E along e_θ, units of c²/√G (geometric: charge over length), O(q1 q2), interference included.
     pub e_theta: Vec<f64>,
     /// D·E along e_φ, same units.
     pub e_phi: Vec<f64>,
+    /// max over the samples of √(E_θ² + E_φ²), D·E in c²/√G.
+    pub peak_abs_e: f64,
     /// ∫du D·E = −D ΔA_⊥ along (e_θ, e_φ), units of charge (√G M): the electromagnetic memory.
     pub memory: ThetaPhi,
     /// Total radiated energy E/(M c²) with interference: flux integral of D²|E|²/(4π) over u and
@@ -249,6 +267,8 @@ pub struct EmWaveformResult {
     pub sources: BTreeMap<&'static str, &'static str>,
     pub spectrum: Option<EmSpectrumResult>,
     pub physical: Option<EmWaveformPhysical>,
+    /// Error estimates of `peak_abs_e`, `e_rad_flux`, `e_rad_closed`, keyed by their JSON key.
+    pub estimates: Estimates,
 }
 
 /// The `units` text of an electromagnetic result.

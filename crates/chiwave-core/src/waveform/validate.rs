@@ -18,6 +18,8 @@ pub(crate) struct Validated {
     pub(crate) rad_per_angle_unit: f64,
     /// Retarded times, units of GM/c³.
     pub(crate) u: Vec<f64>,
+    /// Relative tolerance of the verdicts.
+    pub(crate) tolerance: f64,
 }
 
 impl Validated {
@@ -43,6 +45,7 @@ impl WaveformRequest {
     /// # Errors
     /// [`InputError`] naming the field and its allowed range.
     pub(crate) fn validate(&self) -> Result<Validated, InputError> {
+        let tolerance = crate::validity::tolerance(self.tolerance)?;
         let charges = match self.force {
             WaveformForce::Gravity => ChargeUse::Forbidden,
             WaveformForce::Em => ChargeUse::Required,
@@ -97,6 +100,6 @@ impl WaveformRequest {
         let n = self.samples;
         let du = (u_max - u_min) / (n - 1) as f64;
         let u: Vec<f64> = (0..n).map(|i| if i + 1 == n { u_max } else { u_min + du * i as f64 }).collect();
-        Ok(Validated { two, theta, phi, rad_per_angle_unit, u })
+        Ok(Validated { two, theta, phi, rad_per_angle_unit, u, tolerance })
     }
 }

@@ -163,9 +163,10 @@ impl EmSystem {
     }
 
     /// Regime flags for the straight-line (first-order) approximation (`em_deflection`,
-    /// `em_beaming`; the checks themselves are in the waveform's `flags.rs`).
+    /// `em_beaming`; the checks themselves are in the waveform's `flags.rs`), graded at the
+    /// default tolerance.
     pub fn flags(&self) -> Vec<Flag> {
-        crate::waveform::flags::em_system(self)
+        crate::waveform::flags::em_system(self, crate::validity::DEFAULT_TOLERANCE)
     }
 }
 
