@@ -65,6 +65,26 @@ fn flatten(prefix: &str, v: &Map<String, Value>, out: &mut Vec<(String, String)>
     }
 }
 
+/// Columns of an array of objects that the table leaves out: null in every row, or text that is
+/// the same in every row (printed once under the table instead, as `name: text`).
+fn common_columns(rows: &[Value], cols: &[String]) -> (Vec<String>, Vec<(String, String)>) {
+    let mut keep = Vec::new();
+    let mut notes = Vec::new();
+    for c in cols {
+        let vals: Vec<&Value> = rows.iter().map(|r| r.get(c).unwrap_or(&Value::Null)).collect();
+        if vals.iter().all(|v| v.is_null()) {
+            continue;
+        }
+        let first = vals[0];
+        if rows.len() > 1 && first.is_string() && vals.iter().all(|v| *v == first) {
+            notes.push((c.clone(), first.as_str().unwrap_or_default().to_string()));
+            continue;
+        }
+        keep.push(c.clone());
+    }
+    (keep, notes)
+}
+
 fn object_table(title: &str, rows: &[Value]) -> String {
     let mut cols: Vec<String> = Vec::new();
     for r in rows {
@@ -76,6 +96,7 @@ fn object_table(title: &str, rows: &[Value]) -> String {
             }
         }
     }
+    let (cols, notes) = common_columns(rows, &cols);
     if cols.is_empty() {
         return String::new();
     }
@@ -98,6 +119,65 @@ fn object_table(title: &str, rows: &[Value]) -> String {
         s.push_str(&line(r));
         s.push('\n');
     }
+    for (k, t) in notes {
+        s.push_str(&format!("  {k} (every row): {t}\n"));
+    }
+    s
+}
+
+/// The value under a dotted key (`chi.3pm`, `strong_deflection.alpha`) of a result.
+fn at<'a>(v: &'a Value, key: &str) -> Option<&'a Value> {
+    key.split('.').try_fold(v, |x, k| x.get(k))
+}
+
+/// Relative error as shown: two significant digits.
+fn rel(x: &Value) -> String {
+    x.as_f64().map(|e| format!("{e:.1e}")).unwrap_or_else(|| "—".into())
+}
+
+/// The recommended-value line(s): `recommended <label>: key = value ± estimate (verdict)`, then why.
+fn best_lines(m: &Map<String, Value>) -> String {
+    let mut s = String::new();
+    for (name, label) in [("best", ""), ("best_e_rad", " (radiated energy)")] {
+        let Some(b) = m.get(name) else { continue };
+        let key = b.get("key").and_then(Value::as_str).unwrap_or("?");
+        let verdict = b.get("verdict").and_then(Value::as_str).unwrap_or("?");
+        let why = b.get("why").and_then(Value::as_str).unwrap_or("");
+        match b.get("value").and_then(Value::as_f64) {
+            Some(x) => {
+                let est = b.get("error_estimate").map(rel).unwrap_or_else(|| "—".into());
+                let method = b.get("error_method").and_then(Value::as_str).unwrap_or("");
+                s.push_str(&format!("recommended{label}: {key} = {} ± {est} relative [{verdict}]\n", num(x)));
+                s.push_str(&format!("  why: {why}\n  estimate: {method}\n"));
+            }
+            None => s.push_str(&format!("recommended{label}: none [{verdict}] — {why}\n")),
+        }
+    }
+    if let Some(t) = m.get("tolerance").and_then(Value::as_f64) {
+        s.push_str(&format!("verdicts at tolerance {}: ok < tolerance ≤ caution < 10 × tolerance ≤ outside\n", num(t)));
+    }
+    if !s.is_empty() {
+        s.push('\n');
+    }
+    s
+}
+
+/// The `estimates` map as a table: key, value, estimate, verdict, method (or why there is none).
+fn estimates_table(v: &Value, est: &Map<String, Value>) -> String {
+    let mut rows: Vec<[String; 5]> = vec![["".into(), "value".into(), "estimate".into(), "verdict".into(), "method (or why none)".into()]];
+    for (k, e) in est {
+        let value = at(v, k).and_then(scalar).unwrap_or_else(|| "—".into());
+        let how = match e.get("error_reason").and_then(Value::as_str) {
+            Some(r) => r.to_string(),
+            None => e.get("error_method").and_then(Value::as_str).unwrap_or("").to_string(),
+        };
+        rows.push([k.clone(), value, e.get("error_estimate").map(rel).unwrap_or_default(), e.get("verdict").and_then(Value::as_str).unwrap_or("").into(), how]);
+    }
+    let w: Vec<usize> = (0..4).map(|i| rows.iter().map(|r| r[i].chars().count()).max().unwrap_or(0)).collect();
+    let mut s = String::from("\nError estimates (relative)\n");
+    for r in &rows {
+        s.push_str(&format!("  {:<w0$}  {:>w1$}  {:>w2$}  {:<w3$}  {}\n", r[0], r[1], r[2], r[3], r[4], w0 = w[0], w1 = w[1], w2 = w[2], w3 = w[3]));
+    }
     s
 }
 
@@ -107,11 +187,12 @@ pub fn table(title: &str, v: &Value, notice: &str) -> String {
     let Value::Object(m) = v else {
         return format!("{s}{v}\n");
     };
+    s.push_str(&best_lines(m));
     let mut scalars = Map::new();
     let mut tables = Vec::new();
     for (k, x) in m {
         match (k.as_str(), x) {
-            ("flags" | "sources", _) => {}
+            ("flags" | "sources" | "best" | "best_e_rad" | "estimates" | "tolerance", _) => {}
             (_, Value::Array(a)) if !a.is_empty() && a.iter().all(|e| e.is_object()) => tables.push((k, a)),
             _ => {
                 scalars.insert(k.clone(), x.clone());
@@ -126,6 +207,11 @@ pub fn table(title: &str, v: &Value, notice: &str) -> String {
     }
     for (k, a) in tables {
         s.push_str(&object_table(k, a));
+    }
+    if let Some(Value::Object(est)) = m.get("estimates") {
+        if !est.is_empty() {
+            s.push_str(&estimates_table(v, est));
+        }
     }
     if let Some(Value::Array(flags)) = m.get("flags") {
         s.push_str("\nRegime checks\n");
@@ -248,6 +334,20 @@ mod tests {
         assert!(t.contains("alpha     0.5") || t.contains("alpha  0.5"), "{t}");
         assert!(t.contains("series") && t.contains("weak_field") && t.contains("Darwin 1959"));
         assert!(t.trim_end().ends_with("note"));
+    }
+
+    #[test]
+    fn best_first_and_estimates_table() {
+        let v = json!({"best": {"key": "alpha", "value": 0.5, "error_estimate": 1e-13, "error_method": "closed form", "verdict": "ok", "why": "exact"},
+            "tolerance": 0.01, "alpha": 0.5, "ppn": {"alpha_1pm": 0.4},
+            "series": [{"order": 1, "alpha": 0.4, "error_estimate": 0.2, "error_method": "vs the exact α", "error_reason": null, "verdict": "outside"},
+                       {"order": 2, "alpha": 0.45, "error_estimate": 0.1, "error_method": "vs the exact α", "error_reason": null, "verdict": "outside"}],
+            "estimates": {"ppn.alpha_1pm": {"error_estimate": 0.2, "error_method": "vs the exact α", "error_reason": null, "verdict": "outside"}}});
+        let t = table("Light", &v, "note");
+        let first = t.lines().nth(2).unwrap_or_default();
+        assert!(first.starts_with("recommended: alpha = 0.5 ± 1.0e-13 relative [ok]"), "{t}");
+        assert!(t.contains("error_method (every row): vs the exact α") && !t.contains("error_reason"), "{t}");
+        assert!(t.contains("ppn.alpha_1pm") && t.contains("0.4") && t.contains("2.0e-1"), "{t}");
     }
 
     #[test]
