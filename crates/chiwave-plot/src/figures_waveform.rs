@@ -316,7 +316,7 @@ pub fn slow_motion(t: &[f64], t_label: &str, pm: (&[f64], &[f64]), quad: (&[f64]
     fig.series.push(line("h₊, quadrupole hyperbola", t, quad.0, Style::dashed(palette::AMBER, 2)));
     fig.series.push(line("h×, leading-order PM", t, pm.1, Style::line(palette::CORAL, 2)));
     fig.series.push(line("h×, quadrupole hyperbola", t, quad.1, Style::dashed(palette::PLUM, 2)));
-    fig.series.push(note("differences grow with v (v² in the CM frame, equal masses) and with the deflection χ (≈ 2.3χ of the peak: the LO PM strain is first order in χ)"));
+    fig.series.push(note("differences grow with v (v² in the CM frame, equal masses) and with the deflection χ (up to ≈ 2.3χ of the peak: the LO PM strain is first order in χ)"));
     place_legend(&mut fig);
     fig
 }

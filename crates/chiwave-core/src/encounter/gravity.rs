@@ -74,7 +74,7 @@ pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<GravityResult, Inp
     let terms = [2.0 * c[0] * x, 2.0 * c[1] * x * x, 2.0 * c[2] * x.powi(3), 2.0 * c[3] * x.powi(3)];
     let mut orders = order_rows(&["1PM", "2PM", "3PM conservative", "3PM radiation reaction"], &terms);
     let acc = accuracy::gravity(
-        &accuracy::GravityInputs { k, c, angles, chi_newtonian, chi_test_body, chi_estimate, estimate_missing },
+        &accuracy::GravityInputs { k, c, angles, chi_newtonian, chi_test_body, chi_estimate, estimate_missing, e_rad },
         tol,
     );
     for (row, e) in orders.iter_mut().zip(&acc.orders) {

@@ -9,7 +9,7 @@ use super::grids::SPECTRUM_SKY;
 use super::kernel::{constant_piece, DirectionWaveform, DEFAULT_X_NODES};
 use super::memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 use super::observer::{antenna_pattern, PhysicalScales};
-use super::quadrupole::quadrupole_hyperbola;
+use super::quadrupole::{quadrupole_energy_hyperbola, quadrupole_hyperbola};
 use super::request::{SpectrumOptions, WaveformRequest};
 use super::results::{DetectorResult, GravityWaveformPhysical, GravityWaveformResult, MemoryPair, QuadrupoleResult, SpectrumResult};
 use super::spectrum::spectrum_angle_integrated;
@@ -132,8 +132,23 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
     };
     let peak_abs_h = h_plus.iter().zip(&h_cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max);
     let cm_equal = req.frame == Frame::Cm && (sys.m1 - sys.m2).abs() <= 1e-12 * sys.total_mass();
+    // The slow-motion reference at the same samples (the quadrupole waveform is cheap beside
+    // the LO strain): its peak, and the quadrupole energy of the hyperbola.
+    let slow_peak = match &quadrupole {
+        Some(q) => q.h_plus.iter().zip(&q.h_cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max),
+        None => {
+            let q = quadrupole_hyperbola(&sys, req.frame, theta, phi, &u)?;
+            q.plus.iter().zip(&q.cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max)
+        }
+    };
+    let slow = accuracy::SlowMotion {
+        peak: slow_peak,
+        peak_err: accuracy::quadrupole(v, cm_equal),
+        energy: quadrupole_energy_hyperbola(sys.m1, sys.m2, v, b_over_m),
+        energy_err: v,
+    };
     let (estimates, best, best_e_rad) =
-        accuracy::gravity(chi1, peak_abs_h, closed.energy, e_flux, quadrupole.as_ref().map(|_| (v, cm_equal)), c.tolerance);
+        accuracy::gravity(chi1, peak_abs_h, closed.energy, e_flux, &slow, quadrupole.as_ref().map(|_| (v, cm_equal)), c.tolerance);
     let flags = flags::gravity(&sys, b_over_m, req.energy_flux, chi1, &estimates["peak_abs_h"]);
     Ok(GravityWaveformResult {
         best,

@@ -81,7 +81,7 @@ pub use kernel::{constant_piece, waveform, DirectionWaveform, Strain, DEFAULT_X_
 pub use memory::{memory_braginsky_thorne, zfl_angle_integrated_closed_form};
 pub use observer::{antenna_pattern, characteristic_frequency, spectrum_si, strain_unit, PhysicalScales, SpectrumSi};
 pub use job::{WaveformJob, WaveformPhase, WaveformSnapshot, SpectrumCurves};
-pub use quadrupole::quadrupole_hyperbola;
+pub use quadrupole::{quadrupole_energy_hyperbola, quadrupole_hyperbola};
 pub use request::{DetectorOptions, GravitySystem, SpectrumOptions, TimeUnit, WaveformForce, WaveformRequest};
 pub use results::{
     DetectorResult, EmSpectrumResult, EmWaveformPhysical, EmWaveformResult, GravityWaveformPhysical, GravityWaveformResult,

@@ -35,3 +35,30 @@ pub fn any_f64() -> impl Strategy<Value = f64> {
         1e-12f64..1e12,
     ]
 }
+
+/// Checks one verdict of the accuracy batteries against the actual relative error `actual`
+/// (computed in the test from an independent reference) and prints the row of the battery's
+/// table (`cargo test -- --nocapture` shows them): the verdict must be the one rule's
+/// (`validity::verdict`) on the estimate; `ok` only where actual < tol; `outside` only where
+/// actual > 10·tol/k or there is no estimate. `k` is the estimator's documented conservatism:
+/// 1 for an estimate that measures the distance to a reference in the same result (it then
+/// equals the actual error up to the reference's own small estimate), and the documented factor
+/// by which a bound (a rounding bound, the size of an omitted term) may exceed the actual error.
+pub fn check_verdict(label: &str, e: &chiwave_core::validity::ErrorEstimate, actual: f64, tol: f64, k: f64) {
+    use chiwave_core::validity::{verdict, Verdict};
+    let est = e.error_estimate;
+    println!("| {label} | {:?} | {} | {actual:.2e} | tol {tol:.0e} |", e.verdict, est.map(|x| format!("{x:.2e}")).unwrap_or_else(|| "—".into()));
+    assert_eq!(e.verdict, verdict(est, tol), "{label}: verdict is not the rule's");
+    match e.verdict {
+        Verdict::Ok => assert!(actual < tol, "{label}: ok with actual {actual:e} ≥ tol {tol:e} (estimate {est:?})"),
+        Verdict::Outside => {
+            assert!(est.is_none() || actual > 10.0 * tol / k, "{label}: outside with actual {actual:e} ≤ 10 tol/{k} (estimate {est:?})")
+        }
+        Verdict::Caution => {}
+    }
+    // A conservative estimate: never below the actual error (up to 1e-6 of it, the difference
+    // between relative-to-the-reference and relative-to-the-truth, and rounding).
+    if let Some(x) = est {
+        assert!(x * (1.0 + 1e-6) >= actual || actual < 1e-15, "{label}: estimate {x:e} below the actual error {actual:e}");
+    }
+}
