@@ -31,7 +31,7 @@ async function geometricCase(b) {
 
 test('encounter: χ(3PM) on the page equals the CLI value for m1 = 1, m2 = 3, γ = 1.1, b = 100', async (t) => {
   await geometricCase(100);
-  const cell = page.locator(`${V} [data-role="chi-3pm"]`);
+  const cell = page.locator(`${V} [data-key="cum-3pm"]`);
   await cell.waitFor();
   const chi = Number(await cell.getAttribute('data-value'));
   assert.ok(Number.isFinite(chi) && chi > 0, `page shows χ = ${chi}`);
@@ -51,6 +51,10 @@ test('encounter: χ(3PM) on the page equals the CLI value for m1 = 1, m2 = 3, γ
   }
   const c = cli(['encounter', '--m1', '1', '--m2', '3', '--gamma', '1.1', '--b', '100']);
   if (c.why) { t.skip(c.why); return; }
+  // The headline shows the core's recommended angle (here the 3PM sum) with its estimate.
+  const best = page.locator(`${V} [data-role="headline"] [data-role="best"]`);
+  assert.equal(await best.getAttribute('data-key'), c.json.best.key);
+  assert.equal(Number(await best.locator('[data-role="best-value"]').getAttribute('data-value')), c.json.best.value);
   const ref = c.json.chi['3pm'];
   // Same core code natively and in wasm: equal up to libm differences.
   assert.ok(Math.abs(chi - ref) <= 1e-12 * Math.abs(ref), `page ${chi} vs CLI ${ref}`);
@@ -86,12 +90,12 @@ test('encounter: a captured case is shown as captured, not as an error', async (
 });
 
 test('encounter: bad input is named next to its field and keeps the last result', async () => {
-  const good = await page.getAttribute(`${V} [data-role="chi-3pm"]`, 'data-value');
+  const good = await page.getAttribute(`${V} [data-key="cum-3pm"]`, 'data-value');
   await type('#f-encounter-speed', '0.5');
   const msg = page.locator(`${V} [data-error-for="gamma"]`);
   await msg.waitFor({ state: 'visible' });
   assert.match(await msg.textContent(), /gamma/);
-  assert.equal(await page.getAttribute(`${V} [data-role="chi-3pm"]`, 'data-value'), good);
+  assert.equal(await page.getAttribute(`${V} [data-key="cum-3pm"]`, 'data-value'), good);
   await type('#f-encounter-speed', '1.1');
   assert.equal(await msg.textContent(), '');
 });
@@ -103,13 +107,13 @@ test('encounter: physical units and the electromagnetic table', async () => {
   await type('#f-encounter-speed', '1300');
   await pick('#f-encounter-orbit_unit', 'au');
   await type('#f-encounter-orbit', '0.6');
-  await page.locator(`${V} [data-role="chi-3pm"]`).waitFor();
+  await page.locator(`${V} [data-key="cum-3pm"]`).waitFor();
   assert.match(await page.locator(`${V} .result-body`).textContent(), /Physical units[\s\S]*km\/s[\s\S]*kg m² s⁻¹/);
   await geometricCase(100);
   await pick('#f-encounter-force', 'em');
   await type('#f-encounter-q1', '0.2');
   await type('#f-encounter-q2', '-0.3');
-  const pl = page.locator(`${V} [data-role="chi-3pl"]`);
+  const pl = page.locator(`${V} [data-key="cum-3pl"]`);
   await pl.waitFor();
   assert.ok(Number(await pl.getAttribute('data-value')) > 0, 'attractive charges deflect inward');
   assert.equal(await page.locator(`${V} table[data-role="orders"] tr[data-order]`).count(), 4);

@@ -12,9 +12,11 @@ before(async () => { ({ page } = await ui.ready); });
 
 const type = (selector, text) => ui.fill(selector, text);
 
+/** The recommended value of the light view's headline: the exact α (key `alpha`). */
 async function exactAlpha() {
-  await page.waitForSelector('#view-light [data-role="alpha"]');
-  return Number(await page.getAttribute('#view-light [data-role="alpha"]', 'data-value'));
+  const sel = '#view-light [data-role="best"][data-key="alpha"] [data-role="best-value"]';
+  await page.waitForSelector(sel);
+  return Number(await page.getAttribute(sel, 'data-value'));
 }
 
 /** The CLI's α for `light --b 10`, or {why} when the CLI cannot give it. */
@@ -97,7 +99,7 @@ test('exports: SVG, PNG and CSV downloads work offline', async () => {
   const png = fs.readFileSync(await pngDl.path());
   assert.deepEqual([...png.subarray(1, 4)], [0x50, 0x4e, 0x47], 'PNG signature');
   const [csvDl] = await Promise.all([page.waitForEvent('download'), page.locator('#view-light').getByRole('button', { name: 'CSV' }).click()]);
-  assert.match(fs.readFileSync(await csvDl.path(), 'utf8'), /^quantity,value,unit,relative_error,source/);
+  assert.match(fs.readFileSync(await csvDl.path(), 'utf8'), /^quantity,value,unit,error_estimate,verdict,source/);
 });
 
 test('scenario picker loads a built-in scenario', async () => {

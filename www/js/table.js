@@ -25,20 +25,60 @@ export const col = {
   text: (label, o = {}) => ({ label, kind: 'text', ...o }),
 };
 
-/** Quantity | Value | Unit | Rel. error (relative difference to an exact value in the same result). */
-export const QUANTITY_COLUMNS = [col.label('Quantity'), col.value(), col.unit(), col.rel('Rel. error', { title: 'relative difference to the exact value' })];
+// ---- error estimates and verdicts (from the core: the page decides no level) ----
 
-/** A row of a QUANTITY_COLUMNS table. */
-export function qrow(key, label, value, unit, source, rel) {
-  return { attrs: { 'data-key': key }, cells: [label, num(value, source, { key }), unit || '', num(rel, null, { digits: 3, blank: true })] };
+const VERDICT_CLASS = { ok: 'ok', caution: 'caution', outside: 'invalid' };
+
+/** The tooltip of an error estimate: the number, the method that produced it (or why there is
+ *  none) and the tolerance it was judged at. */
+export function estimateNote(e, tol) {
+  if (!e) return null;
+  const at = tol ? ` (verdict at tolerance ${fmt(tol, 3)})` : '';
+  if (e.error_estimate === null || e.error_estimate === undefined) return `no error estimate: ${e.error_reason || 'none'}${at}`;
+  return `estimated relative error ${fmt(e.error_estimate, 2)}, ${e.error_method}${at}`;
 }
 
-/** Quantity | Value | Unit, rows from [label, value, unit, source, key, digits] (or {section}). */
+/** A verdict badge (ok | caution | outside) with the estimate's method on hover and focus. */
+export function verdictBadge(e, tol) {
+  if (!e || !e.verdict) return '';
+  return el('span', { class: `badge ${VERDICT_CLASS[e.verdict] || 'invalid'}`, tabindex: '0', 'data-verdict': e.verdict, 'data-tip-label': 'Estimate: ', 'data-source': estimateNote(e, tol), text: e.verdict });
+}
+
+/** The two cells of an error estimate: the estimate (relative) and the verdict badge. */
+export function estimateCells(e, tol) {
+  if (!e) return ['', ''];
+  const est = e.error_estimate;
+  return [
+    { node: el('span', { 'data-tip-label': 'Estimate: ', 'data-source': estimateNote(e, tol), 'data-estimate': est ?? '', tabindex: '0' }, est === null || est === undefined ? '—' : fmt(est, 2)), cls: 'num est' },
+    { node: verdictBadge(e, tol), cls: 'verdict' },
+  ];
+}
+
+export const ESTIMATE_COLUMNS = [col.text('Est. error', { cls: 'num', title: 'estimated relative error (hover for the method)' }), col.text('Verdict', { title: 'ok: estimate below the tolerance; caution: below 10×; outside: beyond, or no estimate' })];
+
+/** Quantity | Value | Unit | Est. error | Verdict (the core's error estimate and verdict). */
+export const QUANTITY_COLUMNS = [col.label('Quantity'), col.value(), col.unit(), ...ESTIMATE_COLUMNS];
+
+/** A row of a QUANTITY_COLUMNS table; `e` is the core's error estimate of the value (or none),
+ *  `tol` the tolerance it was judged at. */
+export function qrow(key, label, value, unit, source, e, tol) {
+  return { attrs: { 'data-key': key, 'data-verdict': e ? e.verdict : null }, cells: [label, num(value, source, { key }), unit || '', ...estimateCells(e, tol)] };
+}
+
+/** Quantity | Value | Unit, rows from [label, value, unit, source, key, digits] (or {section});
+ *  with `o.estimates` (the core's estimates map) and `o.tol`, rows whose key has an estimate
+ *  (`[label, value, unit, source, key, digits, estimateKey]`, the 7th item naming it) gain the
+ *  Est. error and Verdict columns. */
 export function valueTable(role, title, list, o = {}) {
+  const withEst = !!o.estimates;
   return {
     role, title, cls: o.cls ?? 'enc',
-    columns: [col.label('Quantity'), col.value(), col.unit()],
-    rows: list.map((x) => (Array.isArray(x) ? { cells: [x[0], num(x[1], x[3], { key: x[4], digits: x[5] }), x[2] || ''] } : x)),
+    columns: [col.label('Quantity'), col.value(), col.unit(), ...(withEst ? ESTIMATE_COLUMNS : [])],
+    rows: list.map((x) => {
+      if (!Array.isArray(x)) return x;
+      const e = withEst && x[6] ? o.estimates[x[6]] : null;
+      return { attrs: e ? { 'data-verdict': e.verdict } : undefined, cells: [x[0], num(x[1], x[3], { key: x[4], digits: x[5] }), x[2] || '', ...(withEst ? estimateCells(e, o.tol) : [])] };
+    }),
   };
 }
 
@@ -79,23 +119,28 @@ export function renderTable(t, { digits = 8 } = {}) {
   return el('table', { class: `results ${t.cls || ''}`.trim(), 'data-role': t.role || null }, el('thead', {}, head), el('tbody', {}, body));
 }
 
-/** CSV rows [quantity, value, unit, relative_error, source] of a table model: one row per number
- *  in a value column (named "row label, column label" where a row has several). */
+/** The header of the CSV export of tables (tableCsvRows). */
+export const CSV_HEAD = ['quantity', 'value', 'unit', 'error_estimate', 'verdict', 'source'];
+
+/** CSV rows [quantity, value, unit, error_estimate, verdict, source] of a table model: one row
+ *  per number in a value column (named "row label, column label" where a row has several); the
+ *  estimate and verdict of a row are the core's (the Est. error and Verdict cells). */
 export function tableCsvRows(t) {
   if (t.csv === false) return [];
   const values = t.columns.map((c, i) => [c, i]).filter(([c]) => c.kind === 'value');
   const unitAt = t.columns.findIndex((c) => c.kind === 'unit');
-  const relAt = t.columns.findIndex((c) => c.kind === 'rel');
   const text = (c) => (c === null || c === undefined ? '' : c instanceof Node ? c.textContent : c.text !== undefined ? c.text : String(c));
   const out = [];
   for (const row of t.rows) {
     if (row.section !== undefined) continue;
     const label = text(row.cells[0]);
-    const rel = relAt >= 0 && row.cells[relAt] && row.cells[relAt].num ? exact(row.cells[relAt].value) : '';
+    const estCell = row.cells.find((c) => c && c.cls === 'num est');
+    const est = estCell ? estCell.node.getAttribute('data-estimate') : '';
+    const verdict = (row.attrs && row.attrs['data-verdict']) || '';
     for (const [c, i] of values) {
       const cell = row.cells[i];
       if (!cell || !cell.num) continue;
-      out.push([values.length > 1 ? `${label}, ${c.label}` : label, exact(cell.value), unitAt >= 0 ? text(row.cells[unitAt]) : (c.unit || ''), rel, cell.source || '']);
+      out.push([values.length > 1 ? `${label}, ${c.label}` : label, exact(cell.value), unitAt >= 0 ? text(row.cells[unitAt]) : (c.unit || ''), est, verdict, cell.source || '']);
     }
   }
   return out;
@@ -117,9 +162,31 @@ export function flagsTable(flags) {
   };
 }
 
-/** CSV rows of the flags. */
+/** CSV rows of the flags (quantity, level, value, '', '', message). */
 export function flagsCsvRows(flags) {
-  return (flags || []).map((f) => [`flag ${f.key}`, f.level, f.value ?? '', '', f.message]);
+  return (flags || []).map((f) => [`flag ${f.key}`, f.level, f.value ?? '', '', '', f.message]);
+}
+
+/** The headline of a result's recommended value (`best` from the core): "recommended: <name> =
+ *  <value> <unit> ± <estimate> <verdict>", the why below. `name` is the view's label of the key,
+ *  `shown` the formatted value (the view converts units for display), `tol` the tolerance;
+ *  the number carries `value` (default best.value: the core's number) in data-value and
+ *  `valueRole` (default `<role>-value`) in data-role. */
+export function bestHeadline(best, { name, shown, unit = '', tol, source, role = 'best', valueRole, value }) {
+  if (!best) return null;
+  const est = best.error_estimate;
+  const e = { error_estimate: est, error_method: best.error_method, error_reason: best.value === null ? best.why : null, verdict: best.verdict };
+  if (best.value === null || best.value === undefined) {
+    return el('span', { 'data-role': role, 'data-key': best.key, 'data-verdict': best.verdict },
+      el('span', { class: 'rec', text: 'recommended: ' }), el('b', { text: 'none' }), ' ', verdictBadge(e, tol), el('span', { class: 'why muted', text: ` — ${best.why}` }));
+  }
+  return el('span', { class: 'best', 'data-role': role, 'data-key': best.key, 'data-verdict': best.verdict },
+    el('span', { class: 'rec', text: 'recommended: ' }), `${name} = `,
+    el('span', { class: 'big', 'data-role': valueRole || `${role}-value`, 'data-value': exact(value ?? best.value), tabindex: source ? '0' : null, 'data-source': source || null }, shown),
+    unit ? ` ${unit}` : '',
+    el('span', { class: 'pm', tabindex: '0', 'data-tip-label': 'Estimate: ', 'data-source': estimateNote(e, tol) }, est === null || est === undefined ? ' (no estimate)' : ` ± ${fmt(est, 2)} (relative)`),
+    ' ', verdictBadge(e, tol),
+    el('div', { class: 'why muted', text: best.why }));
 }
 
 /** Caution banners for every flag that is not ok. */

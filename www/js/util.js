@@ -92,7 +92,7 @@ function showTip(target) {
   if (!tip) tip = document.getElementById('tooltip');
   const src = target.getAttribute('data-source');
   if (!tip || !src) return;
-  tip.replaceChildren(el('b', { text: 'Source: ' }), src);
+  tip.replaceChildren(el('b', { text: target.getAttribute('data-tip-label') || 'Source: ' }), src);
   tip.hidden = false;
   const r = target.getBoundingClientRect();
   const w = Math.min(480, window.innerWidth - 16);

@@ -4,8 +4,8 @@
 // (coalesced to one per animation frame): state → request → one evaluation (core.evaluateView)
 // → headline, tables, figures, cards.
 //
-// Spec (every hook receives ctx = {request, values, result, angleUnit, A(rad), au, src(key…),
-// flags: {key: flag}, kit}):
+// Spec (every hook receives ctx = {request, values, result, tol (the tolerance the core judged
+// the verdicts at), angleUnit, A(rad), au, src(key…), flags: {key: flag}, kit}):
 //   id, title, kind, aliases?: [old ids]     the view id is the #view= name
 //   intro?: text beside "Inputs"; inputs: field/group/note items (inputs.js)
 //   constants?: request fields always sent (e.g. an input angle unit)
@@ -28,9 +28,9 @@
 // choices, card inputs); setState(map) sets them (unknown keys and values that are not options
 // are returned as problems) and updates.
 import { el, exact, download, csv } from './util.js';
-import { buildForm, clip } from './inputs.js';
+import { buildForm, clip, group, number } from './inputs.js';
 import { plotCard } from './plot.js';
-import { renderTable, tableCsvRows, flagsTable, flagsCsvRows, cautionItems, levelOf } from './table.js';
+import { renderTable, tableCsvRows, flagsTable, flagsCsvRows, cautionItems, levelOf, CSV_HEAD } from './table.js';
 import { evaluateView, message, angle, angleLabel, angleUnits, sourceOf } from './core.js';
 
 /** Milliseconds of progressive work per animation frame (the rest of a 60 Hz frame draws). */
@@ -71,7 +71,9 @@ export function makeView(spec) {
   const listeners = []; // called with the state after every update
 
   const update = () => run();
-  const form = buildForm(id, spec.inputs, () => schedule(update));
+  // Every view has the tolerance of its verdicts (request field `tolerance`, state key `tolerance`).
+  const inputs = [...spec.inputs, group('Verdicts', [number('tolerance', 'Tolerance', { hint: '(relative error; ok below it, caution below 10×)', value: '0.01', optional: true })], { role: 'tolerance' })];
+  const form = buildForm(id, inputs, () => schedule(update));
   for (const [k, c] of form.controls) controls.set(k, c);
 
   // ---- results card ----
@@ -179,6 +181,7 @@ export function makeView(spec) {
     const angleUnit = values.angles;
     const ctx = {
       request, values, angleUnit, kit, result: null, flags: {},
+      tol: null,
       A: (rad) => angle(rad, angleUnit),
       au: angleUnit ? angleLabel(angleUnit) : '',
       src: (...keys) => sourceOf(ctx.result, ...keys),
@@ -219,6 +222,7 @@ export function makeView(spec) {
     for (const n of [headline, body, plots]) n.classList.remove('stale');
     for (const c of cards) c.made.root.classList.remove('stale');
     ctx.result = ev.result;
+    ctx.tol = ev.result.tolerance ?? null;
     ctx.flags = Object.fromEntries((ev.result.flags || []).map((f) => [f.key, f]));
 
     // headline, cautions, tables, regime checks
@@ -296,7 +300,7 @@ export function makeView(spec) {
   // ---- exports ----
   csvBtn.addEventListener('click', () => {
     if (!last) return;
-    const rows = spec.csv ? spec.csv(last) : [['quantity', 'value', 'unit', 'relative_error', 'source'],
+    const rows = spec.csv ? spec.csv(last) : [CSV_HEAD,
       ...last.tables.flatMap(tableCsvRows), ...flagsCsvRows(last.result.flags)];
     download(`chiwave-${id}.csv`, csv(rows), 'text/csv');
   });

@@ -275,6 +275,32 @@ impl Best {
     }
 }
 
+/// A number for people in messages: two significant digits, plain from 1e-3 to 1e4, otherwise
+/// in e-notation (`0.32`, `9.6e-4`, `1.5e6`).
+///
+/// # Examples
+/// ```
+/// use chiwave_core::validity::short;
+/// assert_eq!((short(0.3225), short(9.56e-4), short(2.0), short(4.6e6)), ("0.32".into(), "9.6e-4".into(), "2".into(), "4.6e6".into()));
+/// ```
+pub fn short(x: f64) -> String {
+    if !x.is_finite() {
+        return format!("{x}");
+    }
+    let a = x.abs();
+    if a == 0.0 || (1e-3..1e4).contains(&a) {
+        let digits = if a == 0.0 { 0 } else { (1 - a.log10().floor() as i32).max(0) as usize };
+        let s = format!("{x:.digits$}");
+        if s.contains('.') {
+            s.trim_end_matches('0').trim_end_matches('.').to_string()
+        } else {
+            s
+        }
+    } else {
+        format!("{x:.1e}")
+    }
+}
+
 /// The standing caution shown with every result on the page and in the CLI tables.
 pub const ESTIMATE_NOTICE: &str =
     "Results are analytic and perturbative estimates with stated validity; they are not a substitute for full numerical simulations.";

@@ -316,7 +316,8 @@ pub fn slow_motion(t: &[f64], t_label: &str, pm: (&[f64], &[f64]), quad: (&[f64]
     fig.series.push(line("h₊, quadrupole hyperbola", t, quad.0, Style::dashed(palette::AMBER, 2)));
     fig.series.push(line("h×, leading-order PM", t, pm.1, Style::line(palette::CORAL, 2)));
     fig.series.push(line("h×, quadrupole hyperbola", t, quad.1, Style::dashed(palette::PLUM, 2)));
-    fig.series.push(note("differences grow with v (v² in the CM frame, equal masses) and with the deflection χ (up to ≈ 2.3χ of the peak: the LO PM strain is first order in χ)"));
+    fig.series.push(note("differences grow like v (v²: CM frame, equal masses)"));
+    fig.series.push(note("and like the deflection χ, up to ≈ 2.3χ: LO PM is first order in χ"));
     place_legend(&mut fig);
     fig
 }
@@ -446,6 +447,9 @@ mod tests {
         let f = scene::figure(&waveform_request(), "slow_motion", &scene::Options::default()).unwrap();
         let l = labels(&f);
         assert_eq!(&l[..4], ["h₊, leading-order PM", "h₊, quadrupole hyperbola", "h×, leading-order PM", "h×, quadrupole hyperbola"]);
+        // The note says what the difference scales with: v and the deflection χ (tested in
+        // chiwave-core tests/waveform_accuracy.rs).
+        assert!(l.iter().any(|x| x.contains("like v")) && l.iter().any(|x| x.contains("deflection χ")), "{l:?}");
         assert_eq!(f.series[0].points.len(), f.series[1].points.len());
     }
 

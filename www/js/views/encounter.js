@@ -4,9 +4,8 @@
 // No physics here: the only arithmetic is the display conversion of angles.
 import { el, fmt } from '../util.js';
 import { quantity, number, choice, group, note } from '../inputs.js';
-import { num, col, valueTable, badge, renderTable } from '../table.js';
+import { num, col, valueTable, badge, renderTable, estimateCells, bestHeadline, ESTIMATE_COLUMNS } from '../table.js';
 import { plotCard } from '../plot.js';
-import { headNumber } from '../viewkit.js';
 import { compareNr, flagLabel, angle, angleLabel, message } from '../core.js';
 
 const ID = 'encounter';
@@ -20,14 +19,6 @@ const ORDER_SOURCE = {
   '1PM': '1pm', '2PM': '2pm', '3PM conservative': '3pm_conservative', '3PM radiation reaction': '3pm',
   '1PL': '1pl', '2PL': '2pl', '3PL conservative (test charge)': '3pl_conservative', '3PL radiation reaction': '3pl',
 };
-// Which regime flags speak for which row of the angle table.
-const ORDER_FLAGS = {
-  '1PM': ['pm_parameter', 'capture_proximity'], '2PM': ['pm_parameter', 'capture_proximity'],
-  '3PM conservative': ['pm_parameter', 'pm_truncation', 'capture_proximity', 'high_energy'],
-  '3PM radiation reaction': ['pm_parameter', 'pm_truncation', 'capture_proximity'],
-  '1PL': ['pl_parameter'], '2PL': ['pl_parameter'], '3PL conservative (test charge)': ['pl_parameter', 'three_pl_two_body'],
-  '3PL radiation reaction': ['pl_parameter'],
-};
 const KIN_SRC = 'definition (core encounter::kinematics): γ = u₁·u₂, p∞ = √(γ²−1), ν = m₁m₂/M², Γ = E/M = √(1 + 2ν(γ−1)), p = ν M p∞/Γ, J = p b, j = J/(G m₁m₂)';
 const PHYS_SRC = 'core unit conversion with CODATA 2018 G, c, ħ and IAU 2015 M☉, IAU 2012 au';
 const NR_CONV_SRC = 'core encounter::nr: γ = 1 + (Γ² − 1)/(2ν) with Γ = E/M, j = (J/(G M²))/ν; ADM values of initial data used as asymptotic ones is an approximation';
@@ -35,28 +26,22 @@ const NR_CONV_SRC = 'core encounter::nr: γ = 1 + (Γ² − 1)/(2ν) with Γ = E
 const em = (s) => s.force === 'em';
 const grav = (c) => c.request.force !== 'em';
 
-function regimeBadges(flags, keys) {
-  const list = keys.map((k) => flags[k]).filter(Boolean);
-  const bad = list.filter((f) => f.level !== 'ok');
-  const why = (f) => `regime check “${flagLabel(f)}” = ${fmt(f.value, 4)} (${f.level}): ${f.message}`;
-  const frag = document.createDocumentFragment();
-  if (!bad.length) { if (list.length) frag.append(badge('ok', 'ok', list.map(why).join(' · '))); return frag; }
-  frag.append(...bad.map((f) => badge(f.level, `${flagLabel(f)}: ${f.level}`, why(f))));
-  return frag;
-}
+// The view's names of the keys the core may recommend (display text only).
+const BEST_NAME = {
+  'chi.3pm': 'χ (3PM, with radiation reaction)', 'chi.2pm': 'χ (2PM)', 'chi.1pm': 'χ (1PM)',
+  chi_test_body: 'χ, exact test body (ν → 0)', chi_estimate: 'χ, strong-field estimate',
+  'chi.3pl': 'χ (3PL)', 'chi.2pl': 'χ (2PL)', 'chi.1pl': 'χ (1PL)', chi_test_exact: 'χ, Darwin’s exact test charge',
+};
+// Key of the result → key of its `sources` entry.
+const BEST_SOURCE = { 'chi.3pm': '3pm', 'chi.2pm': '2pm', 'chi.1pm': '1pm', 'chi.3pl': '3pl', 'chi.2pl': '2pl', 'chi.1pl': '1pl' };
 
-function headline({ result: res, A, au, src, flags }) {
+function headline({ result: res, A, au, src, flags, tol }) {
   const g = res.force === 'gravity';
-  const best = g ? res.chi['3pm'] : res.chi['3pl'];
+  const b = res.best;
   const captured = g ? res.captured : res.fall_to_centre;
-  const head = [el('span', {}, g ? 'χ (3PM, with radiation reaction) = ' : 'χ (3PL) = '),
-    headNumber(g ? 'chi-3pm' : 'chi-3pl', best, fmt(A(best), 7), src(g ? '3pm' : '3pl')), ` ${au}`];
-  if (captured) head.push(el('span', { class: 'sep', text: ' (formal only: outside validity)' }));
-  if (g) {
-    head.push(el('span', { class: 'sep', text: ' · strong-field estimate: ' }));
-    head.push(res.captured ? badge('captured', 'captured', src('chi_estimate'))
-      : headNumber('chi-estimate', res.chi_estimate, res.chi_estimate === null ? '—' : `${fmt(A(res.chi_estimate), 6)} ${au}`, src('chi_estimate'), 'big2'));
-  } else if (res.fall_to_centre) head.push(' ', badge('captured', 'falls to the centre', src('chi_test_exact')));
+  const head = [bestHeadline(b, { name: BEST_NAME[b.key] || b.key, shown: fmt(A(b.value), 7), unit: au, tol, source: src(BEST_SOURCE[b.key] || b.key) })];
+  if (g && res.captured) head.push(el('div', {}, 'strong-field estimate: ', badge('captured', 'captured', src('chi_estimate'))));
+  else if (!g && res.fall_to_centre) head.push(el('div', {}, badge('captured', 'falls to the centre', src('chi_test_exact'))));
   // regime strip: PM (PL) parameter, capture proximity (fall to centre), velocity regime
   const chips = (g ? ['pm_parameter', 'capture_proximity', 'velocity_regime'] : ['pl_parameter', 'fall_to_centre', 'velocity_regime'])
     .map((k) => flags[k]).filter(Boolean)
@@ -72,35 +57,37 @@ function cautions({ result: res }) {
     'the strong-field estimate predicts capture (no scattering angle). PM numbers below are formal only.')];
 }
 
-function body({ result: res, A, au, src, flags }) {
+function body({ result: res, A, au, src, tol }) {
   const g = res.force === 'gravity';
-  // 1. the angle, order by order, and the reference values
+  const E = res.estimates || {};
+  // 1. the angle, order by order, and the reference values: every row with the core's error
+  // estimate and verdict (the page decides no level)
   const rows = [{ section: g ? 'Post-Minkowskian series (cumulative)' : 'Post-Lorentzian series (cumulative)' }];
   for (const o of res.orders) {
     const s = src(ORDER_SOURCE[o.order]);
-    rows.push({ attrs: { 'data-order': o.order }, cells: [o.order,
+    rows.push({ attrs: { 'data-order': o.order, 'data-verdict': o.verdict }, cells: [o.order,
       num(A(o.term), s), num(A(o.cumulative), s, { key: `cum-${ORDER_SOURCE[o.order]}` }),
       num(o.share_of_total, 'core OrderRow: this term / the most complete value', { digits: 4 }),
       num(o.relative_change, 'core OrderRow: this term / the sum of the lower orders', { digits: 4 }),
-      regimeBadges(flags, ORDER_FLAGS[o.order] || [])] });
+      ...estimateCells(o, tol)] });
   }
-  rows.push({ section: 'Reference values (same γ and j)' });
-  const ref = (label, v, key, flagKeys, capText) => {
+  rows.push({ section: g ? 'Other values of the same angle (same γ and j)' : 'Exact test-charge angle (same γ and κ)' });
+  const ref = (label, v, key, capText) => {
     const s = src(key);
-    rows.push({ attrs: { 'data-ref': key }, cells: [label, '',
+    rows.push({ attrs: { 'data-ref': key, 'data-verdict': E[key] ? E[key].verdict : null }, cells: [label, '',
       v === null || v === undefined ? { node: badge('captured', capText || 'n/a', s), cls: 'num' } : num(A(v), s, { key }),
-      '', '', regimeBadges(flags, flagKeys)] });
+      '', '', ...estimateCells(E[key], tol)] });
   };
   if (g) {
-    ref('Newtonian hyperbola', res.chi_newtonian, 'chi_newtonian', ['velocity_regime']);
-    ref('exact test body (ν → 0)', res.chi_test_body, 'chi_test_body', ['capture_proximity'], 'captured');
-    ref('strong-field estimate', res.chi_estimate, 'chi_estimate', ['strong_field_estimate', 'capture_proximity'], res.captured ? 'captured' : 'unavailable');
+    ref('Newtonian hyperbola', res.chi_newtonian, 'chi_newtonian');
+    ref('exact test body (ν → 0)', res.chi_test_body, 'chi_test_body', 'captured');
+    ref('strong-field estimate', res.chi_estimate, 'chi_estimate', res.captured ? 'captured' : 'unavailable');
   } else {
-    ref('exact test charge (Darwin)', res.chi_test_exact, 'chi_test_exact', ['fall_to_centre'], 'falls to the centre');
+    ref('exact test charge (Darwin)', res.chi_test_exact, 'chi_test_exact', 'falls to the centre');
   }
   const orders = {
     role: 'orders', title: 'Scattering angle, order by order', cls: 'enc orders', rows,
-    columns: [col.label('Order'), col.value(`Term Δχ [${au}]`, { unit: au }), col.value(`Cumulative χ [${au}]`, { unit: au }), col.value('Share of total'), col.value('Rel. change'), col.text('Regime', { cls: 'regime' })],
+    columns: [col.label('Order'), col.value(`Term Δχ [${au}]`, { unit: au }), col.value(`Cumulative χ [${au}]`, { unit: au }), col.value('Share of total'), col.value('Rel. change'), ...ESTIMATE_COLUMNS],
   };
 
   // 2. kinematics
@@ -151,17 +138,18 @@ function body({ result: res, A, au, src, flags }) {
   if (p && p.impulse_transverse_kg_m_s !== undefined) imp.push({ cells: ['transverse, SI', num(p.impulse_transverse_kg_m_s, PHYS_SRC), '', 'kg m s⁻¹'] });
 
   // 4. radiation
+  // The 7th item names the row's error estimate (relative, so the SI rows share it).
   const rad = g ? [
-    ['radiated energy E_rad (CM, O(G³))', res.e_rad, 'M c²', src('e_rad'), 'e_rad'],
+    ['radiated energy E_rad (CM, O(G³))', res.e_rad, 'M c²', src('e_rad'), 'e_rad', undefined, 'e_rad'],
     ['radiated momentum (CM, along body 1)', res.p_rad_cm, 'M c', src('p_rad_cm')],
-    ['radiated angular momentum J_rad/J (O(G²))', res.j_rad, '', src('j_rad')],
+    ['radiated angular momentum J_rad/J (O(G²))', res.j_rad, '', src('j_rad'), undefined, undefined, 'j_rad'],
   ] : [
-    ['E_rad, test charge (rest frame of body 2)', res.e_rad, 'M c²', src('e_rad'), 'e_rad'],
-    ['E_rad, two-body dipole (v ≪ c)', res.e_rad_dipole, 'M c²', src('e_rad_dipole')],
-    ['mechanical J_rad/J (O(e⁴))', res.j_rad, '', src('j_rad')],
+    ['E_rad, test charge (rest frame of body 2)', res.e_rad, 'M c²', src('e_rad'), 'e_rad', undefined, 'e_rad'],
+    ['E_rad, two-body dipole (v ≪ c)', res.e_rad_dipole, 'M c²', src('e_rad_dipole'), undefined, undefined, 'e_rad_dipole'],
+    ['mechanical J_rad/J (O(e⁴))', res.j_rad, '', src('j_rad'), undefined, undefined, 'j_rad'],
   ];
-  if (p && g) rad.push(['E_rad', p.e_rad_j, 'J', src('e_rad')], ['E_rad', p.e_rad_msun_c2, 'M☉ c²', src('e_rad')], ['J_rad', p.j_rad_si, 'kg m² s⁻¹', src('j_rad')]);
-  if (p && !g) rad.push(['E_rad, test charge', p.e_rad_j, 'J', src('e_rad')], ['E_rad, dipole', p.e_rad_dipole_j, 'J', src('e_rad_dipole')]);
+  if (p && g) rad.push(['E_rad', p.e_rad_j, 'J', src('e_rad'), undefined, undefined, 'e_rad'], ['E_rad', p.e_rad_msun_c2, 'M☉ c²', src('e_rad'), undefined, undefined, 'e_rad'], ['J_rad', p.j_rad_si, 'kg m² s⁻¹', src('j_rad'), undefined, undefined, 'j_rad']);
+  if (p && !g) rad.push(['E_rad, test charge', p.e_rad_j, 'J', src('e_rad'), undefined, undefined, 'e_rad'], ['E_rad, dipole', p.e_rad_dipole_j, 'J', src('e_rad_dipole'), undefined, undefined, 'e_rad_dipole']);
 
   return [
     orders,
@@ -169,7 +157,7 @@ function body({ result: res, A, au, src, flags }) {
       [valueTable('kinematics', 'Kinematics', kin)],
       [{ role: 'impulse', title: 'Impulse Δp₁ of body 1', cls: 'enc', rows: imp,
         columns: [col.label('Component'), col.value('CM frame'), col.value('Rest frame of 2'), col.unit()] },
-      valueTable('radiated', g ? 'Radiated' : 'Radiated (electromagnetic)', rad)],
+      valueTable('radiated', g ? 'Radiated' : 'Radiated (electromagnetic)', rad, { estimates: E, tol })],
     ] },
     { note: g ? 'Units: G = c = 1 with M = m₁ + m₂ (lengths GM/c², momenta M c, energies M c², J in G M²/c). Impulse transverse along b̂ from body 2 to body 1 (attraction negative).' : `Units: ${res.units} (Coulomb force q₁q₂/r²), M = m₁ + m₂.` },
   ];

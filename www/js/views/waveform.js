@@ -5,8 +5,7 @@
 // source on hover/focus. No physics here.
 import { el, fmt, exact } from '../util.js';
 import { quantity, number, choice, check, group, field, control, note } from '../inputs.js';
-import { num, col, valueTable, renderTable } from '../table.js';
-import { headNumber } from '../viewkit.js';
+import { num, col, valueTable, renderTable, bestHeadline } from '../table.js';
 import { startWaveformJob, waveformSource, bOverGm, convertAngle } from '../core.js';
 
 const ID = 'waveform';
@@ -43,24 +42,29 @@ const degrees = (pick) => (r) => {
 };
 const detectorAngle = (k, absent) => degrees((r) => (r.detector ? (r.detector[k] ?? absent) : undefined));
 
-function headline({ request, result: res }) {
+function headline({ request, result: res, tol }) {
   if (request.force === 'em') {
-    return el('span', {}, 'E_rad with interference = ',
-      headNumber('em-e-rad-flux', res.e_rad_flux, fmt(res.e_rad_flux, 8), waveformSource(res, 'em', 'flux')), ' M c²');
+    const b = res.best_e_rad;
+    const S = waveformSource(res, 'em', b.key === 'e_rad_flux' ? 'flux' : 'closed_form');
+    return el('span', {}, bestHeadline(b, { name: b.key === 'e_rad_flux' ? 'E_rad with interference' : 'E_rad (no interference)', shown: fmt(b.value, 8), unit: 'M c²', tol, source: S, role: 'best-e-rad', valueRole: 'em-e-rad-flux' }),
+      bestHeadline(res.best, { name: 'peak D·|E|', shown: fmt(res.best.value, 6), unit: 'c²/√G', tol, source: waveformSource(res, 'em', 'field') }));
   }
   const S = (n) => waveformSource(res, 'gravity', n);
   const p = res.physical;
   const phys = p && p.distance_m !== null && p.distance_m !== undefined;
-  const head = phys
-    ? [el('span', {}, 'peak |h| = '), headNumber('peak-strain', p.peak_strain, fmt(p.peak_strain, 4), `${S('waveform')}; ${PH}`)]
-    : [el('span', {}, 'peak D·|h| = '), headNumber('peak-strain', res.peak_abs_h, fmt(res.peak_abs_h, 5), S('waveform')), ' GM/c²'];
-  head.push(el('span', { class: 'sep', text: ' · E_rad = ' }),
-    headNumber('e-rad-headline', p ? p.e_rad_j : res.e_rad_closed, p ? `${fmt(p.e_rad_j, 4)} J` : `${fmt(res.e_rad_closed, 5)} M c²`, S('closed_form'), 'big2'));
-  return el('span', {}, ...head);
+  // The relative estimate holds for the strain at D too (the same number times GM/(c²D)).
+  const peak = phys
+    ? bestHeadline(res.best, { name: 'peak |h| at D', shown: fmt(p.peak_strain, 4), tol, source: `${S('waveform')}; ${PH}`, valueRole: 'peak-strain', value: p.peak_strain })
+    : bestHeadline(res.best, { name: 'peak D·|h|', shown: fmt(res.best.value, 5), unit: 'GM/c²', tol, source: S('waveform'), valueRole: 'peak-strain' });
+  const e = p
+    ? bestHeadline(res.best_e_rad, { name: 'E_rad', shown: fmt(p.e_rad_j, 4), unit: 'J', tol, source: S('closed_form'), role: 'best-e-rad', valueRole: 'e-rad-headline', value: p.e_rad_j })
+    : bestHeadline(res.best_e_rad, { name: 'E_rad', shown: fmt(res.best_e_rad.value, 5), unit: 'M c²', tol, source: S('closed_form'), role: 'best-e-rad', valueRole: 'e-rad-headline' });
+  return el('span', {}, peak, e);
 }
 
-function gravityBody(res) {
+function gravityBody(res, tol) {
   const S = (n) => waveformSource(res, 'gravity', n);
+  const E = res.estimates || {};
   const p = res.physical;
   const phys = p && p.distance_m !== null && p.distance_m !== undefined;
   const frameName = res.frame === 'cm' ? 'centre-of-mass frame' : 'rest frame of body 2';
@@ -74,15 +78,16 @@ function gravityBody(res) {
       mem('memory Δh₊ (late − early)', 'plus', res.memory.plus, res.memory_braginsky_thorne.plus),
       mem('memory Δh×', 'cross', res.memory.cross, res.memory_braginsky_thorne.cross)],
   };
+  // The 7th item names the row's error estimate (the core's; relative, so the SI rows share it).
   const w = [
-    ['peak D·|h| over the samples', res.peak_abs_h, 'GM/c²', S('waveform'), 'peak-geometric'],
+    ['peak D·|h| over the samples', res.peak_abs_h, 'GM/c²', S('waveform'), 'peak-geometric', undefined, 'peak_abs_h'],
     ['constant O(G) piece h₊ (not plotted)', res.constant_piece.plus, 'GM/c²', `${S('waveform')}; u-independent field of the incoming bodies, not Lorentz-covariant`],
     ['constant O(G) piece h×', res.constant_piece.cross, 'GM/c²', `${S('waveform')}; u-independent field of the incoming bodies`],
     ['relative Lorentz factor γ', res.gamma, '', 'core waveform request (input)', 'gamma'],
     ['relative speed v', res.v, 'c', 'v = √(γ² − 1)/γ (definition)'],
     ['m₁/M, m₂/M', `${fmt(res.m1_over_m, 6)}, ${fmt(res.m2_over_m, 6)}`, '', 'core waveform request (input)'],
     ['impact parameter b', bOverGm(res), 'GM/c²', 'core waveform request (input)', 'b'],
-    ['E_rad (closed form)', res.e_rad_closed, 'M c²', S('closed_form'), 'e-rad-closed-table'],
+    ['E_rad (closed form)', res.e_rad_closed, 'M c²', S('closed_form'), 'e-rad-closed-table', undefined, 'e_rad_closed'],
     ['P_rad along x (closed form)', res.p_rad_closed[0], 'M c', S('closed_form')],
   ];
   if (res.detector) w.push(['antenna pattern F₊', res.detector.f_plus, '', S('antenna')], ['antenna pattern F×', res.detector.f_cross, '', S('antenna')]);
@@ -91,28 +96,30 @@ function gravityBody(res) {
     const sc = p.scales;
     const rows = [['GM/c²', sc.mass_length_m, 'm', PH], ['GM/c³ (time unit of u)', sc.mass_time_s, 's', PH], ['b/c', sc.b_over_c_s, 's', PH],
       ['characteristic frequency v/(2πb)', sc.f_char_hz, 'Hz', 'rule of thumb f ≈ v/(2πb) for v ≪ c (see the f_char_rule check)', 'f-char'],
-      ['E_rad (closed form)', p.e_rad_j, 'J', S('closed_form'), 'e-rad-j'], ['E_rad (closed form)', p.e_rad_msun_c2, 'M☉ c²', S('closed_form')]];
+      ['E_rad (closed form)', p.e_rad_j, 'J', S('closed_form'), 'e-rad-j', undefined, 'e_rad_closed'], ['E_rad (closed form)', p.e_rad_msun_c2, 'M☉ c²', S('closed_form'), undefined, undefined, 'e_rad_closed']];
     if (phys) {
       rows.push(['distance D', p.distance_m, 'm', PH], ['strain unit G²m₁m₂/(c⁴Db)', sc.strain_unit, '', `definition (${PH})`],
-        ['peak |h| at D', p.peak_strain, '', `${S('waveform')}; ${PH}`, 'peak-strain-table'],
+        ['peak |h| at D', p.peak_strain, '', `${S('waveform')}; ${PH}`, 'peak-strain-table', undefined, 'peak_abs_h'],
         ['memory Δh₊ at D', p.memory_strain.plus, '', `${S('memory')}; ${PH}`], ['memory Δh× at D', p.memory_strain.cross, '', `${S('memory')}; ${PH}`]);
     }
-    physical = valueTable('physical', 'Physical units', rows);
+    physical = valueTable('physical', 'Physical units', rows, { estimates: E, tol });
   } else physical = { title: 'Physical units', note: 'Give the masses with a unit (M☉ or kg) for seconds, joules and the strain at a distance.' };
   return [
     memory,
-    { grid: [[valueTable('waveform', 'Waveform and system', w)], [physical]] },
-    { note: 'Leading order: the O(G²) strain of straight-line orbits with their first-order deflection (weak field, any speed). Results are estimates, not a substitute for full simulations.' },
+    { grid: [[valueTable('waveform', 'Waveform and system', w, { estimates: E, tol })], [physical]] },
+    { note: 'Leading order: the O(G²) strain of straight-line orbits with their first-order deflection (weak field, any speed; its error grows with the deflection angle). Results are estimates, not a substitute for full simulations.' },
   ];
 }
 
-function emBody(res) {
+function emBody(res, tol) {
   const S = (n) => waveformSource(res, 'em', n);
+  const E = res.estimates || {};
   const rows = [
+    ['peak D·|E| over the samples', res.peak_abs_e, 'c²/√G', S('field'), 'em-peak', undefined, 'peak_abs_e'],
     ['E_rad, body 1 alone (Liénard)', res.e_rad_body1, 'M c²', S('closed_form'), 'em-body1'],
     ['E_rad, body 2 alone (Larmor)', res.e_rad_body2, 'M c²', S('closed_form'), 'em-body2'],
-    ['E_rad, sum of the bodies (no interference)', res.e_rad_closed, 'M c²', S('closed_form'), 'em-closed'],
-    ['E_rad, flux integral with interference', res.e_rad_flux, 'M c²', S('flux'), 'em-flux'],
+    ['E_rad, sum of the bodies (no interference)', res.e_rad_closed, 'M c²', S('closed_form'), 'em-closed', undefined, 'e_rad_closed'],
+    ['E_rad, flux integral with interference', res.e_rad_flux, 'M c²', S('flux'), 'em-flux', undefined, 'e_rad_flux'],
     ['interference part', res.interference, 'M c²', S('flux')],
     ['estimated relative error of the flux integral', res.e_rad_flux_rel_error, '', S('flux')],
     ['memory ∫du D·E_θ = −DΔA_θ', res.memory.theta, '√G M', S('memory')],
@@ -127,7 +134,7 @@ function emBody(res) {
     rows.push(['E_rad body 1', res.physical.e_rad_body1_j, 'J', `${S('closed_form')}; ${ph}`], ['E_rad body 2', res.physical.e_rad_body2_j, 'J', `${S('closed_form')}; ${ph}`],
       ['E_rad with interference', res.physical.e_rad_flux_j, 'J', `${S('flux')}; ${ph}`]);
   }
-  return [valueTable('em', 'Electromagnetic radiation, rest frame of body 2', rows), { note: `Units: ${res.units}.` }];
+  return [valueTable('em', 'Electromagnetic radiation, rest frame of body 2', rows, { estimates: E, tol }), { note: `Units: ${res.units}.` }];
 }
 
 /** The live energy balance: the flux integral of the progressive job against the closed form. */
@@ -296,7 +303,7 @@ export const waveformView = {
   // The gravitational sky integrals run progressively (the job), not in the evaluation.
   resultRequest: (req) => (req.force === 'em' ? req : { ...req, energy_flux: false }),
   headline,
-  body: (c) => (em(c) ? emBody(c.result) : gravityBody(c.result)),
+  body: (c) => (em(c) ? emBody(c.result, c.tol) : gravityBody(c.result, c.tol)),
   figures: [
     { stem: 'strain', name: 'strain', title: 'Strain h₊, h× against time', when: gravity },
     { stem: 'sky', title: 'Sky map', when: gravity, work: true },

@@ -8,7 +8,7 @@
 
 use super::{series, strong, Deflection, Metric};
 use crate::error::InputError;
-use crate::validity::{Best, ErrorEstimate, Estimates};
+use crate::validity::{short, Best, ErrorEstimate, Estimates};
 
 /// Method phrases (shown as `error_method`).
 pub(crate) const VS_EXACT: &str = "vs the exact α";
@@ -182,17 +182,20 @@ pub(crate) fn strong_next_bound(d: f64) -> f64 {
 /// ```
 pub fn strong_reported(d: f64) -> Result<(f64, f64), String> {
     let Some((lead, next)) = strong::limit(d) else {
-        return Err(format!("b/b_c − 1 = {d:.3e} ≤ 0: captured"));
+        return Err(format!("b/b_c − 1 = {} ≤ 0: captured", short(d)));
     };
     if !(lead > 0.0 && next > 0.0) {
         return Err(format!(
-            "b/b_c − 1 = {d:.3} is not small: the strong-deflection expansion in ln(b/b_c − 1) gives no meaningful value here (its leading term would be {lead:.3} rad)"
+            "b/b_c − 1 = {} is not small: the strong-deflection expansion in ln(b/b_c − 1) gives no meaningful value here (its leading term would be {} rad)",
+            short(d),
+            short(lead)
         ));
     }
     let corr = (next - lead).abs() / next;
     if corr > STRONG_DEFLECTION_MAX_CORRECTION {
         return Err(format!(
-            "b/b_c − 1 = {d:.3} is not small: the next-order correction is {:.0} % of the value, so the strong-deflection expansion is not meaningful here",
+            "b/b_c − 1 = {} is not small: the next-order correction is {:.0} % of the value, so the strong-deflection expansion is not meaningful here",
+            short(d),
             100.0 * corr
         ));
     }

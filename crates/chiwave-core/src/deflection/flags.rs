@@ -5,7 +5,7 @@ use super::accuracy::LightAccuracy;
 use super::request::Validated;
 use super::results::SeriesTerm;
 use super::Metric;
-use crate::validity::{verdict, Check, Flag, Level, Verdict};
+use crate::validity::{short, verdict, Check, Flag, Level, Verdict};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const CAPTURE: Check = Check::new("capture", "capture b/b_c − 1");
@@ -19,7 +19,7 @@ const WAVELENGTH_VS_BEAM: Check = Check::new("wavelength_vs_beam", "wavelength/b
 
 /// Relative error shown in a message: two significant digits.
 fn rel(x: f64) -> String {
-    format!("{x:.1e}")
+    short(x)
 }
 
 /// The regime flags for one evaluation (thresholds are common practice unless stated). Flags
@@ -41,10 +41,10 @@ pub(crate) fn light(v: &Validated, d: f64, alpha: Option<f64>, series: &[SeriesT
             Level::from(first.verdict),
             Some(1.0 / v.b),
             match first.verdict {
-                Verdict::Ok => format!("M/b = {:.3e}: the first-order value 4M/b (and the PPN first-order forms) is within {} of the exact α{series_note}.", 1.0 / v.b, rel(e)),
+                Verdict::Ok => format!("M/b = {}: the first-order value 4M/b (and the PPN first-order forms) is within {} of the exact α{series_note}.", short(1.0 / v.b), rel(e)),
                 _ => format!(
-                    "M/b = {:.3e}: the first-order value 4M/b (and the PPN first-order forms) is {} from the exact α; use the exact α{series_note}.",
-                    1.0 / v.b,
+                    "M/b = {}: the first-order value 4M/b (and the PPN first-order forms) is {} from the exact α; use the exact α{series_note}.",
+                    short(1.0 / v.b),
                     rel(e)
                 ),
             },
@@ -58,12 +58,12 @@ pub(crate) fn light(v: &Validated, d: f64, alpha: Option<f64>, series: &[SeriesT
             CAPTURE,
             Level::Caution,
             Some(d),
-            format!("b/b_c − 1 = {d:.2e}: within 1% of the critical impact parameter; the ray winds near the photon orbit and α ∝ −ln(b/b_c − 1) is very sensitive to b."),
+            format!("b/b_c − 1 = {}: within 1% of the critical impact parameter; the ray winds near the photon orbit and α ∝ −ln(b/b_c − 1) is very sensitive to b.", short(d)),
         )
     } else if d < 1.0 {
-        Flag::new(CAPTURE, Level::Ok, Some(d), format!("b/b_c − 1 = {d:.3}: the ray escapes (b > b_c), passing near the photon orbit."))
+        Flag::new(CAPTURE, Level::Ok, Some(d), format!("b/b_c − 1 = {}: the ray escapes (b > b_c), passing near the photon orbit.", short(d)))
     } else {
-        Flag::new(CAPTURE, Level::Ok, Some(d), format!("b/b_c − 1 = {d:.3}: well outside the capture cross-section (b > 2 b_c)."))
+        Flag::new(CAPTURE, Level::Ok, Some(d), format!("b/b_c − 1 = {}: well outside the capture cross-section (b > 2 b_c).", short(d)))
     });
     let ratio = 1.0 / (d + 1.0);
     let note = match v.metric {
@@ -76,8 +76,8 @@ pub(crate) fn light(v: &Validated, d: f64, alpha: Option<f64>, series: &[SeriesT
             Level::from(t.estimate.verdict),
             Some(ratio),
             match t.estimate.error_estimate {
-                Some(e) => format!("b_c/b = {ratio:.3}: the series converges (b > b_c{note}); through order {} it is within {} of the exact α.", t.order, rel(e)),
-                None => format!("b_c/b = {ratio:.3}: the series converges (b > b_c{note}), but its error could not be estimated."),
+                Some(e) => format!("b_c/b = {}: the series converges (b > b_c{note}); through order {} it is within {} of the exact α.", short(ratio), t.order, rel(e)),
+                None => format!("b_c/b = {}: the series converges (b > b_c{note}), but its error could not be estimated.", short(ratio)),
             },
         ),
         _ => Flag::new(
@@ -93,7 +93,7 @@ pub(crate) fn light(v: &Validated, d: f64, alpha: Option<f64>, series: &[SeriesT
             STRONG_DEFLECTION,
             Level::from(lead.verdict),
             Some(d),
-            format!("d = b/b_c − 1 = {d:.2e}: Bozza's logarithmic form is within about {} of the exact α here (its error grows like d ln d).", rel(e)),
+            format!("d = b/b_c − 1 = {}: Bozza's logarithmic form is within about {} of the exact α here (its error grows like d ln d).", short(d), rel(e)),
         ));
     }
     if let Some(lambda) = v.wavelength {
@@ -102,9 +102,9 @@ pub(crate) fn light(v: &Validated, d: f64, alpha: Option<f64>, series: &[SeriesT
         // 2003, astro-ph/0305055): the validity parameter's scaling, judged by the one verdict rule.
         let level = Level::from(verdict(Some(1.0 / w), v.tolerance));
         let msg = if w >= 1.0 {
-            format!("w = 4π·2M/λ = {w:.3e}: wave-optics corrections (interference, diffraction) to the ray picture are of relative order 1/w = {}.", rel(1.0 / w))
+            format!("w = 4π·2M/λ = {}: wave-optics corrections (interference, diffraction) to the ray picture are of relative order 1/w = {}.", short(w), rel(1.0 / w))
         } else {
-            format!("w = 4π·2M/λ = {w:.3e} < 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).")
+            format!("w = 4π·2M/λ = {} < 1: the wavelength exceeds the Schwarzschild radius; diffraction dominates and a ray deflection angle has no meaning (Takahashi & Nakamura 2003, astro-ph/0305055).", short(w))
         };
         out.push(Flag::new(GEOMETRIC_OPTICS, level, Some(w), msg));
     }

@@ -3,7 +3,7 @@
 
 use crate::error::InputError;
 use crate::two_body::Kinematics;
-use crate::validity::{Check, ErrorEstimate, Flag, Level};
+use crate::validity::{short, Check, ErrorEstimate, Flag, Level};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const STRONG_FIELD_ESTIMATE: Check = Check::new("strong_field_estimate", "strong-field estimate");
@@ -33,7 +33,8 @@ pub(crate) fn estimate_flags(mut eob_flags: Vec<Flag>, est: &ErrorEstimate) -> V
         f.value = est.error_estimate;
         f.message = match est.error_estimate {
             Some(e) => format!(
-                "Strong-field estimate (PM angle coefficients resummed into an effective-one-body radial potential, Damour 2018; Damour & Rettegno 2023): estimated relative error {e:.1e} ({}).",
+                "Strong-field estimate (PM angle coefficients resummed into an effective-one-body radial potential, Damour 2018; Damour & Rettegno 2023): estimated relative error {} ({}).",
+                short(e),
                 est.error_method
             ),
             None => format!(
@@ -48,7 +49,7 @@ pub(crate) fn estimate_flags(mut eob_flags: Vec<Flag>, est: &ErrorEstimate) -> V
 /// Relative error shown in a message.
 fn rel(e: &ErrorEstimate) -> String {
     match e.error_estimate {
-        Some(x) => format!("{x:.1e} ({})", e.error_method),
+        Some(x) => format!("{} ({})", short(x), e.error_method),
         None => format!("not estimated ({})", e.error_reason.as_deref().unwrap_or("unknown")),
     }
 }
@@ -66,8 +67,8 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
         level,
         Some(pm_x),
         match level {
-            Level::Ok => format!("GM/(b v²) = {pm_x:.3}: the PM series converges quickly here; the 3PM value's estimated error is {}.", rel(est3)),
-            _ => format!("GM/(b v²) = {pm_x:.3}: the 3PM value's estimated error is {}; compare with the exact test-body angle and the strong-field estimate.", rel(est3)),
+            Level::Ok => format!("GM/(b v²) = {}: the PM series converges quickly here; the 3PM value's estimated error is {}.", short(pm_x), rel(est3)),
+            _ => format!("GM/(b v²) = {}: the 3PM value's estimated error is {}; compare with the exact test-body angle and the strong-field estimate.", short(pm_x), rel(est3)),
         },
     ));
     let ratio = k.j / j_c;
@@ -79,12 +80,12 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
             CAPTURE_PROXIMITY,
             level,
             Some(ratio),
-            format!("j/j_c = {ratio:.4}: a test body (ν → 0) at this γ would be captured (j ≤ j_c), so the exact test-body angle is not available; for ν = {:.3} the two-body capture threshold differs (see the strong-field estimate).", k.nu),
+            format!("j/j_c = {}: a test body (ν → 0) at this γ would be captured (j ≤ j_c), so the exact test-body angle is not available; for ν = {} the two-body capture threshold differs (see the strong-field estimate).", short(ratio), short(k.nu)),
         )
     } else if ratio < 2.0 {
-        Flag::new(CAPTURE_PROXIMITY, Level::Caution, Some(ratio), format!("j/j_c = {ratio:.4}: within a factor 2 of the test-body capture threshold: strong field; read each angle's error estimate."))
+        Flag::new(CAPTURE_PROXIMITY, Level::Caution, Some(ratio), format!("j/j_c = {}: within a factor 2 of the test-body capture threshold: strong field; read each angle's error estimate.", short(ratio)))
     } else {
-        Flag::new(CAPTURE_PROXIMITY, Level::Ok, Some(ratio), format!("j/j_c = {ratio:.3}: far from the test-body capture threshold (j > 2 j_c)."))
+        Flag::new(CAPTURE_PROXIMITY, Level::Ok, Some(ratio), format!("j/j_c = {}: far from the test-body capture threshold (j > 2 j_c).", short(ratio)))
     });
     flags.push(velocity(s.v));
     flags.push(if s.gamma > 10.0 {
@@ -96,7 +97,7 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
         PM_TRUNCATION,
         level,
         Some(pm3_share),
-        format!("The 3PM term is {:.1e} of χ; the 3PM value's estimated error is {}.", pm3_share, rel(est3)),
+        format!("The 3PM term is {} of χ; the 3PM value's estimated error is {}.", short(pm3_share), rel(est3)),
     ));
 }
 
@@ -112,8 +113,8 @@ pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool, est3: &Err
         level,
         Some(x),
         match level {
-            Level::Ok => format!("|q1 q2|/(J p∞) = {x:.3}: the PL series converges quickly here; the 3PL value's estimated error is {}.", rel(est3)),
-            _ => format!("|q1 q2|/(J p∞) = {x:.3}: the 3PL value's estimated error is {}; compare with the exact test-charge angle.", rel(est3)),
+            Level::Ok => format!("|q1 q2|/(J p∞) = {}: the PL series converges quickly here; the 3PL value's estimated error is {}.", short(x), rel(est3)),
+            _ => format!("|q1 q2|/(J p∞) = {}: the 3PL value's estimated error is {}; compare with the exact test-charge angle.", short(x), rel(est3)),
         },
     ));
     flags.push(if fall {

@@ -2,7 +2,7 @@
 //! optics (thresholds are common practice unless a flag names a source).
 
 use super::wave;
-use crate::validity::{verdict, Check, ErrorEstimate, Flag, Level, Verdict};
+use crate::validity::{short, verdict, Check, ErrorEstimate, Flag, Level, Verdict};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const DISTANCES: Check = Check::new("distances", "distances");
@@ -25,8 +25,8 @@ pub(crate) fn point_lens(theta: f64, alpha_e: f64, z_l: f64, u: f64, mu: f64, to
         Level::from(v),
         Some(alpha_e),
         match v {
-            Verdict::Ok => format!("Deflection at the Einstein ring 4GM/(c²R_E) = {alpha_e:.2e}: the thin-lens point-mass formulas hold to about this relative size, provided the lens is compact (its size ≪ R_E) and isolated."),
-            _ => format!("Deflection at the Einstein ring 4GM/(c²R_E) = {alpha_e:.2e} is not small: post-thin-lens corrections reach this relative size; use the exact deflection."),
+            Verdict::Ok => format!("Deflection at the Einstein ring 4GM/(c²R_E) = {}: the thin-lens point-mass formulas hold to about this relative size, provided the lens is compact (its size ≪ R_E) and isolated.", short(alpha_e)),
+            _ => format!("Deflection at the Einstein ring 4GM/(c²R_E) = {} is not small: post-thin-lens corrections reach this relative size; use the exact deflection.", short(alpha_e)),
         },
     ));
     flags.push(Flag::small_parameter(
@@ -71,7 +71,7 @@ pub(crate) fn point_lens(theta: f64, alpha_e: f64, z_l: f64, u: f64, mu: f64, to
     } else if u < 10.0 {
         (Level::Ok, format!("Source outside the Einstein ring (u ≥ 1, μ ≤ 1.342): the saddle image is the fainter one; {seen}."))
     } else {
-        (Level::Ok, format!("Source far outside the Einstein ring (u ≥ 10): μ − 1 ≈ 2/u⁴ = {:.2e}, the saddle image is negligible.", 2.0 / u.powi(4)))
+        (Level::Ok, format!("Source far outside the Einstein ring (u ≥ 10): μ − 1 ≈ 2/u⁴ = {}, the saddle image is negligible.", short(2.0 / u.powi(4))))
     };
     flags.push(Flag::new(LENSING_STRENGTH, level, Some(u), msg));
     flags
@@ -95,13 +95,13 @@ pub(crate) fn wave_optics(w: f64, delta_t: f64, method: wave::Method, go: &Error
         ],
     ));
     let level = Level::from(go.verdict);
-    let size = go.error_estimate.map(|e| format!("{e:.1e}")).unwrap_or_else(|| "unknown".into());
+    let size = go.error_estimate.map(short).unwrap_or_else(|| "unknown".into());
     let msg = if w < 1.0 {
-        format!("w = {w:.3e} < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1; the geometric-optics F is {size} off (relative). Use `amplification`.")
+        format!("w = {} < 1: the wavelength exceeds the lens' Schwarzschild radius; diffraction dominates and |F| → 1; the geometric-optics F is {size} off (relative). Use `amplification`.", short(w))
     } else {
         match level {
-            Level::Ok => format!("w = {w:.3e}: geometric optics holds here; the geometric-optics F is within {size} of the exact F ({})", go.error_method),
-            _ => format!("w = {w:.3e}: diffraction matters; the geometric-optics F is {size} off ({}): use `amplification`, not the ray magnifications.", go.error_method),
+            Level::Ok => format!("w = {}: geometric optics holds here; the geometric-optics F is within {size} of the exact F ({})", short(w), go.error_method),
+            _ => format!("w = {}: diffraction matters; the geometric-optics F is {size} off ({}): use `amplification`, not the ray magnifications.", short(w), go.error_method),
         }
     };
     flags.push(Flag::new(GEOMETRIC_OPTICS, level, Some(w), msg));

@@ -3,7 +3,7 @@
 
 use super::em::{EmEnergies, EmSystem};
 use super::frames::Binary;
-use crate::validity::{verdict, Check, ErrorEstimate, Flag, Level};
+use crate::validity::{short, verdict, Check, ErrorEstimate, Flag, Level};
 
 /// The regime checks of this file: stable key and the label shown with it.
 const F_CHAR_RULE: Check = Check::new("f_char_rule", "f_char rule of thumb");
@@ -32,15 +32,15 @@ pub(crate) fn gravity(sys: &Binary, b_over_gm: f64, energy_flux: bool, chi1: f64
     let gamma = sys.gamma;
     let deflection_level = Level::from(peak.verdict);
     let mut flags = vec![b_weak_field(b_over_gm, chi1, deflection_level)];
-    let size = peak.error_estimate.map(|e| format!("{e:.2e}")).unwrap_or_else(|| "unknown".into());
+    let size = peak.error_estimate.map(short).unwrap_or_else(|| "unknown".into());
     flags.push(Flag::new(
         WEAK_DEFLECTION,
         deflection_level,
         Some(chi1),
         match deflection_level {
-            Level::Ok => format!("LO deflection angle χ₁ = {chi1:.3e} rad: the leading-order waveform (first order in the deflection) misses relative corrections of about {size}."),
-            _ if chi1 < 1.0 => format!("LO deflection angle χ₁ = {chi1:.3e} rad is not small: the leading-order waveform misses relative corrections of about {size} (at v ≪ c the quadrupole waveform of the Newtonian hyperbola, figure slow_motion, holds to about v)."),
-            _ => format!("Deflection angle χ₁ = {chi1:.3e} rad is large (or the bodies are captured): the leading-order waveform does not apply."),
+            Level::Ok => format!("LO deflection angle χ₁ = {} rad: the leading-order waveform (first order in the deflection) misses relative corrections of about {size}.", short(chi1)),
+            _ if chi1 < 1.0 => format!("LO deflection angle χ₁ = {} rad is not small: the leading-order waveform misses relative corrections of about {size} (at v ≪ c the quadrupole waveform of the Newtonian hyperbola, figure slow_motion, holds to about v).", short(chi1)),
+            _ => format!("Deflection angle χ₁ = {} rad is large (or the bodies are captured): the leading-order waveform does not apply.", short(chi1)),
         },
     ));
     let v = sys.v();
@@ -75,11 +75,11 @@ fn b_weak_field(b_over_m: f64, chi1: f64, deflection: Level) -> Flag {
             "b is only a few tens of GM/c² or less: the leading-order (weak-deflection) waveform misses corrections of relative size ~GM/(c² b) and larger; treat it as indicative".to_string(),
         )
     } else if deflection == Level::Ok {
-        (Level::Ok, format!("b = {b_over_m:.3e} GM/c² ≫ GM/c² and the deflection χ₁ = {chi1:.2e} rad is small: the weak-deflection expansion of the waveform applies"))
+        (Level::Ok, format!("b = {} GM/c² ≫ GM/c² and the deflection χ₁ = {} rad is small: the weak-deflection expansion of the waveform applies", short(b_over_m), short(chi1)))
     } else {
         (
             deflection,
-            format!("b = {b_over_m:.3e} GM/c² ≫ GM/c², so the field along the orbit is weak, but at this speed the deflection χ₁ = {chi1:.2e} rad is not small: the weak-deflection expansion is limited by it (see weak_deflection)"),
+            format!("b = {} GM/c² ≫ GM/c², so the field along the orbit is weak, but at this speed the deflection χ₁ = {} rad is not small: the weak-deflection expansion is limited by it (see weak_deflection)", short(b_over_m), short(chi1)),
         )
     };
     Flag::new(B_WEAK_FIELD, level, Some(b_over_m), msg)
@@ -106,9 +106,9 @@ pub(crate) fn em_system(sys: &EmSystem, tol: f64) -> Vec<Flag> {
             level,
             Some(x),
             match level {
-                Level::Ok => format!("deflection and recoil {x:.2e} are small: the straight-line O(q1 q2) field applies to about this relative size"),
-                Level::Caution => format!("deflection or recoil {x:.2e}: expect corrections of that relative size to the straight-line field"),
-                Level::Invalid => format!("deflection or recoil {x:.2e} is not small: the straight-line approximation fails"),
+                Level::Ok => format!("deflection and recoil {} are small: the straight-line O(q1 q2) field applies to about this relative size", short(x)),
+                Level::Caution => format!("deflection or recoil {}: expect corrections of that relative size to the straight-line field", short(x)),
+                Level::Invalid => format!("deflection or recoil {} is not small: the straight-line approximation fails", short(x)),
             },
         ),
         Flag::small_parameter(
