@@ -321,13 +321,14 @@ pub(crate) fn electromagnetic(inp: &EmInputs, tol: f64) -> EmAccuracy {
     let (a1, a2) = (q1 / k.m1, q2 / k.m2);
     let canc = ((a1.abs() + a2.abs()) / (a1 - a2).abs()).powi(2);
     let v = k.speed.v;
+    let dipole_method = "validity parameter: 4v² × ((|q₁/m₁| + |q₂/m₂|)/|q₁/m₁ − q₂/m₂|)² (relativistic and quadrupole corrections), plus the 1PL deflection angle";
     est.insert(
         "e_rad_dipole",
-        ErrorEstimate::new(
-            4.0 * v * v * canc + chi1,
-            "validity parameter: 4v² × ((|q₁/m₁| + |q₂/m₂|)/|q₁/m₁ − q₂/m₂|)² (relativistic and quadrupole corrections), plus the 1PL deflection angle",
-            tol,
-        ),
+        if a1 == a2 {
+            ErrorEstimate::none("equal charge-to-mass ratios: the dipole radiation vanishes and the quadrupole order decides", dipole_method, tol)
+        } else {
+            ErrorEstimate::new(4.0 * v * v * canc + chi1, dipole_method, tol)
+        },
     );
     est.insert("j_rad", ErrorEstimate::new(chi1, "validity parameter: the 1PL deflection angle (the next order is smaller by about this factor)", tol));
 

@@ -57,7 +57,7 @@ pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<EmResult, InputErr
     for (row, e) in orders.iter_mut().zip(&acc.orders) {
         row.estimate = e.clone();
     }
-    let mut flags = flags::electromagnetic(k, kappa, fall, &orders[3].estimate);
+    let mut flags = flags::electromagnetic(k, kappa, fall, &orders[3].estimate, &acc.estimates["e_rad_dipole"]);
     let physical = s.physical.map(|sc| {
         use units::codata2018::{C, EPSILON0, G, HBAR};
         let e_unit = sc.m_kg * C * C;

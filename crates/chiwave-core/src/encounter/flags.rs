@@ -103,7 +103,10 @@ pub(crate) fn gravity(flags: &mut Vec<Flag>, k: &Kinematics, j_c: f64, pm3_share
 
 /// Flags of the PL series (Gaussian units): units, expansion parameter, fall to the centre,
 /// speed, the omitted two-body 3PL part, the dipole formula's speed.
-pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool, est3: &ErrorEstimate) -> Vec<Flag> {
+/// `est3` is the 3PL value's error estimate, `dipole` that of the two-body dipole E_rad: the
+/// flags that grade them (`pl_parameter`, `dipole_nonrelativistic`) take their levels from those
+/// verdicts.
+pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool, est3: &ErrorEstimate, dipole: &ErrorEstimate) -> Vec<Flag> {
     let s = &k.speed;
     let mut flags = vec![Flag::new(UNITS, Level::Ok, None, "Gaussian units with c = 1 (Coulomb force q1 q2/r²); SI charges were converted with q1 q2 → q1 q2/(4π ε0).")];
     let x = kappa.abs() / s.p_inf;
@@ -123,27 +126,25 @@ pub(crate) fn electromagnetic(k: &Kinematics, kappa: f64, fall: bool, est3: &Err
         Flag::new(FALL_TO_CENTRE, Level::Ok, Some(kappa), "No fall to the centre (κ > −1).")
     });
     flags.push(velocity(s.v));
-    flags.push(Flag::small_parameter(
-        THREE_PL_TWO_BODY,
-        k.nu,
-        0.01,
-        0.3,
-        [
-            "Near the test-charge limit: the omitted two-body ν part of the conservative 3PL term is small.",
-            "The conservative 3PL term uses the test-charge coefficient; its two-body ν dependence is not included.",
-            "The conservative 3PL term uses the test-charge coefficient; its two-body ν dependence is not included.",
-        ],
-    ));
-    flags.push(Flag::small_parameter(
+    // A condition: the 3PL rows' error estimates include the size of the omitted part.
+    flags.push(if k.nu < 0.01 {
+        Flag::new(THREE_PL_TWO_BODY, Level::Ok, Some(k.nu), "Near the test-charge limit: the omitted two-body ν part of the conservative 3PL term is small.")
+    } else {
+        Flag::new(
+            THREE_PL_TWO_BODY,
+            Level::Caution,
+            Some(k.nu),
+            format!("ν = {}: the conservative 3PL term uses the test-charge coefficient; its two-body ν dependence is not included (its size is part of the 3PL rows' error estimates).", short(k.nu)),
+        )
+    });
+    flags.push(Flag::new(
         DIPOLE_NONRELATIVISTIC,
-        s.v,
-        0.1,
-        0.3,
-        [
-            "v ≪ c: the two-body dipole E_rad (key e_rad_dipole) applies.",
-            "v not small: the non-relativistic dipole E_rad is only indicative.",
-            "v close to c: the non-relativistic dipole E_rad does not apply; use the test-charge e_rad.",
-        ],
+        Level::from(dipole.verdict),
+        Some(s.v),
+        match dipole.error_estimate {
+            Some(e) => format!("v = {}: the non-relativistic two-body dipole E_rad (key e_rad_dipole) has an estimated relative error {} ({}).", short(s.v), short(e), dipole.error_method),
+            None => format!("v = {}: the two-body dipole E_rad has no error estimate ({}); use the test-charge e_rad.", short(s.v), dipole.error_reason.as_deref().unwrap_or("unknown")),
+        },
     ));
     flags
 }

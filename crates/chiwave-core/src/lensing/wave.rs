@@ -115,7 +115,7 @@ impl Method {
                 "exact (Takahashi & Nakamura 2003); 1F1 by its converged large-|z| expansion (DLMF 13.7.2)".into()
             }
             Method::GeometricOptics => {
-                "geometric-optics limit √|μ+| − i√|μ−| e^{iwΔT}: the exact evaluation would be too costly here; error ~ 1/w".into()
+                "geometric-optics limit √|μ+| − i√|μ−| e^{iwΔT}: the exact evaluation would be too costly here; error of order 1/(wΔT) + 1/(wy²)".into()
             }
         }
     }

@@ -8,7 +8,7 @@ use crate::validity::{Best, ErrorEstimate, Estimates};
 const LO_STRAIN: &str = "validity parameter: the leading-order deflection angle χ₁ (the LO strain is first order in the deflection)";
 const E_RAD: &str = "validity parameter: exp(3χ₁) − 1 with χ₁ the leading-order deflection angle (calibrated on the slow-motion radiated energy)";
 const QUADRUPOLE: &str = "validity parameter: v (octupole and current-quadrupole corrections; v² in the CM frame with equal masses)";
-const EM_FIELD: &str = "validity parameter: the deflection and recoil Δp/(γ m₁ v), Δp/(m₂ v) (the field of straight lines)";
+const EM_FIELD: &str = "validity parameter: the deflection and recoil Δp/(γ m₁ v), Δp/(m₂ v) (the field of straight lines), plus G m₁m₂/|q₁q₂| (the radiation of the gravitational acceleration, left out)";
 
 /// Relative error estimate of the slow-motion (quadrupole-formula) waveform of the Newtonian
 /// hyperbola against the full one: v, or 10 v² in the centre-of-mass frame with equal masses
@@ -88,16 +88,21 @@ pub(crate) fn gravity(
 }
 
 /// The estimates of an electromagnetic waveform result: `x` is the larger of the deflection and
-/// the recoil (the `em_deflection` parameter); `flux` the flux integral with interference and
-/// its own relative error estimate, when computed; `closed` the sum of the bodies' closed forms.
-pub(crate) fn electromagnetic(x: f64, peak: f64, closed: f64, flux: Option<(f64, f64)>, tol: f64) -> (Estimates, Best, Best) {
+/// the recoil (the `em_deflection` parameter) and `g` = G m₁m₂/|q₁q₂| (gravity, left out of the
+/// force law, accelerates the charges too: their field changes at that relative size); `flux`
+/// the flux integral with interference and its own relative error estimate, when computed;
+/// `closed` the sum of the bodies' closed forms. Energies are quadratic in the field: 2(x + g)
+/// plus its square.
+pub(crate) fn electromagnetic(x: f64, g: f64, peak: f64, closed: f64, flux: Option<(f64, f64)>, tol: f64) -> (Estimates, Best, Best) {
     let mut est = Estimates::new();
-    let peak_est = ErrorEstimate::new(x, EM_FIELD, tol);
+    let field = x + g;
+    let x = field * (2.0 + field);
+    let peak_est = ErrorEstimate::new(field, EM_FIELD, tol);
     est.insert("peak_abs_e", peak_est.clone());
     let best = Best::new("peak_abs_e", peak, &peak_est, "the peak of the first-order field over the samples");
     let best_e = match flux {
         Some((f, ferr)) => {
-            let fe = ErrorEstimate::new(x + ferr, "validity parameter (deflection and recoil), plus the flux integral's own error estimate", tol);
+            let fe = ErrorEstimate::new(x + ferr, "validity parameter (deflection and recoil, neglected gravity; squared for an energy), plus the flux integral's own error estimate", tol);
             est.insert("e_rad_flux", fe.clone());
             est.insert(
                 "e_rad_closed",

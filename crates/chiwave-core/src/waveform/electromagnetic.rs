@@ -61,6 +61,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
     let peak_abs_e = f.e_theta.iter().zip(&f.e_phi).map(|(a, b)| a.hypot(*b)).fold(0.0, f64::max);
     let (estimates, best, best_e_rad) = accuracy::electromagnetic(
         flags::em_deflection_parameter(&sys),
+        m1 * m2 / (q1 * q2).abs(),
         peak_abs_e,
         e1 + e2,
         energies.as_ref().map(|e| (e.total_flux, e.rel_error_estimate)),

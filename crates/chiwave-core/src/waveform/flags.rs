@@ -131,16 +131,17 @@ pub(crate) fn electromagnetic(sys: &EmSystem, energies: Option<&EmEnergies>, tol
     let mut flags = em_system(sys, tol);
     // Gravity between the bodies is left out of this force law: compare the couplings.
     let g_over_q = sys.m1 * sys.m2 / (sys.q1 * sys.q2).abs();
-    flags.push(Flag::small_parameter(
+    // Its size is part of the field's error estimate, so it is graded by the same rule.
+    let level = Level::from(verdict(Some(g_over_q), tol));
+    flags.push(Flag::new(
         GRAVITY_NEGLECTED,
-        g_over_q,
-        0.01,
-        0.3,
-        [
-            "gravity is negligible next to the Coulomb coupling (G m1 m2 ≪ |q1 q2|)",
-            "G m1 m2/|q1 q2| is not negligible: the gravitational deflection and radiation, left out here, correct the result at that relative size",
-            "gravity is comparable to or stronger than the Coulomb coupling: this electromagnetic-only result misses the dominant interaction",
-        ],
+        level,
+        Some(g_over_q),
+        match level {
+            Level::Ok => format!("G m1 m2/|q1 q2| = {}: gravity is negligible next to the Coulomb coupling", short(g_over_q)),
+            Level::Caution => format!("G m1 m2/|q1 q2| = {} is not negligible: the gravitational acceleration, left out here, changes the field and the radiation at that relative size", short(g_over_q)),
+            Level::Invalid => format!("G m1 m2/|q1 q2| = {}: gravity is comparable to or stronger than the Coulomb coupling; this electromagnetic-only result misses the dominant interaction", short(g_over_q)),
+        },
     ));
     flags.push(Flag::new(
         UNITS,
