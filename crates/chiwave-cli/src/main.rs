@@ -30,7 +30,9 @@ commands
   help        this text, or `chiwave help COMMAND`
 
 Quantities take a unit suffix (1Msun, 6.957e8m, 4kpc, 1000km/s, 100Hz); a bare number is
-geometric (G = c = 1, lengths in units of the mass). Full option lists: README.md.";
+geometric (G = c = 1, lengths in units of the mass). Every command takes --tolerance T (relative
+error, 1e-12 … 0.5, default 0.01): each value's estimated error is judged ok below T, caution
+below 10 T, outside beyond; the recommended value is printed first. Full option lists: README.md.";
 
 fn command_help(cmd: &str) -> Option<&'static str> {
     Some(match cmd {
