@@ -205,3 +205,25 @@ fn slow_motion_overlay_difference_scales_with_deflection_and_v_squared() {
         assert!((3.5..4.5).contains(&(b / a)), "doubling v: ratio {}", b / a); // O(v²): doubling v multiplies the difference by 4
     }
 }
+
+#[test]
+fn quadrupole_overlay_estimate_is_conservative() {
+    // At χ = 2e-5 the LO PM strain is exact in v to that order: the quadrupole waveform's peak
+    // differs from it by the octupole and current-quadrupole corrections alone (O(v); O(v²) in
+    // the CM frame with equal masses). Its estimate (v, or 10v²) must cover that, by 2 or more.
+    for (m1, frame) in [(1.0, "cm"), (1.0, "rest2"), (0.25, "cm"), (0.25, "rest2")] {
+        for v in [0.01, 0.03] {
+            let b = 1e5 / (v * v);
+            for (th, ph) in [(0.4, 0.3), (1.2, 2.0), (2.2, 4.5)] {
+                let r = request(&format!(
+                    r#"{{"m1": {m1}, "m2": 1, "v": {v}, "b": {b}, "theta": {th}, "phi": {ph}, "frame": "{frame}", "u_min": -12, "u_max": 12, "u_unit": "b_over_v", "samples": 801, "energy_flux": false, "quadrupole": true}}"#
+                ));
+                let q = r.quadrupole.as_ref().unwrap();
+                let peak_q = q.h_plus.iter().zip(&q.h_cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max);
+                let actual = rel_diff(peak_q, r.peak_abs_h);
+                let est = r.estimates["quadrupole"].error_estimate.unwrap();
+                assert!(2.0 * actual <= est, "m1 = {m1}, {frame}, v = {v}, θ = {th}: actual {actual:e} vs estimate {est:e}");
+            }
+        }
+    }
+}

@@ -21,8 +21,8 @@ use std::f64::consts::{FRAC_PI_2, PI};
 
 /// Factor on the spread between the strong-field estimates from 3PM and from 2PM information:
 /// against the exact test-body angle (ν → 0) the spread times this factor exceeds the actual
-/// error by 1.5 or more for 1.001 ≤ γ ≤ 100 and j/j_c from 1.0001 to 1000
-/// (tests/encounter_accuracy.rs).
+/// error by 1.5 or more for 1.01 ≤ γ ≤ 10 and j/j_c from 1.01 to 1000 (mpmath references,
+/// tests/encounter_accuracy.rs).
 pub const EOB_SPREAD_FACTOR: f64 = 3.0;
 
 const VS_TB: &str = "vs the exact test-body angle (same γ, j) with the ν-dependence known through 3PM, plus an estimate of the rest";
@@ -50,10 +50,11 @@ fn against(x: f64, refs: &[Option<Reference>]) -> Option<(f64, &'static str)> {
         .min_by(|a, b| a.0.total_cmp(&b.0))
 }
 
-fn estimate(x: f64, refs: &[Option<Reference>], reason: &str, tol: f64) -> ErrorEstimate {
+/// The estimate of `x` against `refs`, or none for `reason` (named by `method`).
+fn estimate(x: f64, refs: &[Option<Reference>], reason: &str, method: &str, tol: f64) -> ErrorEstimate {
     match against(x, refs) {
         Some((e, m)) => ErrorEstimate::new(e, m, tol),
-        None => ErrorEstimate::none(reason, VS_TB, tol),
+        None => ErrorEstimate::none(reason, method, tol),
     }
 }
 
@@ -116,7 +117,7 @@ pub fn tb_reference(c: &[f64; 4], schw: &[f64; 3], h: f64, j: f64, chi_tb: f64) 
 /// deflection angle χ₁: exp(3χ₁) − 1. In slow motion the exact quadrupole energy of the
 /// Newtonian hyperbola exceeds its large-eccentricity limit (the O(G³) value) by ≈ 2.25χ for
 /// small χ, 0.56 at χ = 0.2 and 7.3 at χ = 0.93 (Peters–Mathews power integrated along the
-/// hyperbola, tests/reference/radiated_mpmath.py); exp(3χ) − 1 stays above it up to χ ≈ 2.5,
+/// hyperbola, tests/reference/accuracy_mpmath.py); exp(3χ) − 1 stays above it up to χ ≈ 2.5,
 /// where any estimate is far beyond every tolerance.
 pub fn radiated(chi1: f64) -> f64 {
     (3.0 * chi1.abs()).exp_m1()
@@ -163,9 +164,9 @@ pub(crate) fn gravity(inp: &GravityInputs, tol: f64) -> GravityAccuracy {
     let refs = [tb, eob];
     let no_ref = "no reference: the test body is captured at this γ and j, and the strong-field estimate is captured, unavailable or without its own estimate";
 
-    let orders: Vec<ErrorEstimate> = inp.angles.iter().map(|&x| estimate(x, &refs, no_ref, tol)).collect();
+    let orders: Vec<ErrorEstimate> = inp.angles.iter().map(|&x| estimate(x, &refs, no_ref, VS_TB, tol)).collect();
     let mut est = Estimates::new();
-    est.insert("chi_newtonian", estimate(inp.chi_newtonian, &refs, no_ref, tol));
+    est.insert("chi_newtonian", estimate(inp.chi_newtonian, &refs, no_ref, VS_TB, tol));
     // The test-body angle as a proxy: against its ν-corrected self (the known ν-dependence plus
     // the tail estimate) or, if smaller, through the strong-field estimate.
     let tb_est = match inp.chi_test_body {
@@ -293,7 +294,7 @@ pub(crate) fn electromagnetic(inp: &EmInputs, tol: f64) -> EmAccuracy {
     });
     let refs = [d_ref];
     let fall = "the test charge falls to the centre (κ ≤ −1): no exact angle to compare with, and the series has no meaning";
-    let orders: Vec<ErrorEstimate> = inp.cumulative.iter().map(|&x| estimate(x, &refs, fall, tol)).collect();
+    let orders: Vec<ErrorEstimate> = inp.cumulative.iter().map(|&x| estimate(x, &refs, fall, VS_DARWIN, tol)).collect();
     let mut est = Estimates::new();
     est.insert(
         "chi_test_exact",

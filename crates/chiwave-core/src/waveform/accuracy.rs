@@ -12,9 +12,9 @@ const EM_FIELD: &str = "validity parameter: the deflection and recoil Δp/(γ m�
 
 /// Relative error estimate of the slow-motion (quadrupole-formula) waveform of the Newtonian
 /// hyperbola against the full one: v, or 10 v² in the centre-of-mass frame with equal masses
-/// (where the odd multipoles cancel). Measured against the leading-order PM strain at small
-/// deflection the difference is ≤ 0.5 v (frame A, or unequal masses) and ≤ 2 v² (CM, equal
-/// masses) in the peak (tests/waveform_accuracy.rs).
+/// (where the odd multipoles cancel). Against the leading-order PM strain at a deflection too
+/// small to matter (exact in v at that order) the peak differs by at most half of this
+/// (tests/waveform_accuracy.rs).
 pub fn quadrupole(v: f64, cm_equal_masses: bool) -> f64 {
     if cm_equal_masses {
         10.0 * v * v
