@@ -136,18 +136,7 @@ fn quadrupole_straight(m1: f64, m2: f64, v: f64, b: f64, th: f64, ph: f64, t: f6
             h[i][j] = 4.0 * mu * (v0[i] * dv[j] + dv[i] * v0[j] - m * x[i] * x[j] / (r * r * r));
         }
     }
-    let (st, ct) = th.sin_cos();
-    let (sp, cp) = ph.sin_cos();
-    let et = [ct * cp, ct * sp, -st];
-    let ep = [-sp, cp, 0.0];
-    let mut out = [0.0; 2];
-    for i in 0..3 {
-        for j in 0..3 {
-            out[0] += 0.5 * (et[i] * et[j] - ep[i] * ep[j]) * h[i][j];
-            out[1] += 0.5 * (et[i] * ep[j] + ep[i] * et[j]) * h[i][j];
-        }
-    }
-    out
+    plus_cross(&h, th, ph)
 }
 
 /// Slow motion: in the CM frame with equal masses the LO PM waveform approaches the quadrupole

@@ -56,18 +56,7 @@ fn quadrupole_reference(nu: f64, v: f64, b: f64, theta: f64, phi: f64, t: f64) -
             h[i][j] = 4.0 * nu * (vel[i] * vel[j] - pos[i] * pos[j] / r3 - vinf[i] * vinf[j]);
         }
     }
-    let (st, ct) = theta.sin_cos();
-    let (sp, cp) = phi.sin_cos();
-    let et = [ct * cp, ct * sp, -st];
-    let ep = [-sp, cp, 0.0];
-    let mut out = [0.0; 2];
-    for i in 0..3 {
-        for j in 0..3 {
-            out[0] += 0.5 * (et[i] * et[j] - ep[i] * ep[j]) * h[i][j];
-            out[1] += et[i] * ep[j] * h[i][j];
-        }
-    }
-    out
+    plus_cross(&h, theta, phi)
 }
 
 #[test]
