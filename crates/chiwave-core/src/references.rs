@@ -347,8 +347,6 @@ const BOOK: Reference = Reference { kind: Kind::Book, ..ART };
 
 /// Note for arXiv entries whose title, authors and id were compared with the abstract page.
 const SEEN: &str = "title, authors and arXiv id compared with the arXiv abstract page; journal reference as recalled";
-/// Note for entries whose journal reference was also seen in the search.
-const SEEN_JOURNAL: &str = "title, authors, arXiv id and journal reference compared with the abstract page and the journal's listing";
 /// Note for arXiv entries not looked up again.
 const RECALLED: &str = "recalled from memory (title, authors, journal, arXiv id); not compared with the abstract page";
 /// Note for books.

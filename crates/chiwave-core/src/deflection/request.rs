@@ -196,6 +196,7 @@ impl LightRequest {
             }
         });
         let alpha_arcsec = physical.as_ref().and_then(|p| p.alpha_arcsec);
+        let (sources, citations) = sources::light(v.metric);
         Ok(LightResult {
             metric: v.metric.name(),
             alpha,
@@ -210,7 +211,8 @@ impl LightRequest {
             alpha_arcsec,
             physical,
             flags: flags::light(&v, d),
-            sources: sources::light(v.metric),
+            sources,
+            citations,
         })
     }
 }

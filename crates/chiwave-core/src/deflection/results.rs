@@ -2,9 +2,9 @@
 //! order written here).
 
 use super::{ppn, strong};
+use crate::references::{CitationMap, SourceMap};
 use crate::validity::Flag;
 use serde::Serialize;
-use std::collections::BTreeMap;
 
 /// One weak-field partial sum.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -67,6 +67,8 @@ pub struct LightResult {
     #[serde(skip_serializing_if = "Option::is_none")]
     pub physical: Option<LightPhysical>,
     pub flags: Vec<Flag>,
-    /// Output key → citation of the formula that produced it.
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → citation of the formula that produced it (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
 }

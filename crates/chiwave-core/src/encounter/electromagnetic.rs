@@ -66,6 +66,7 @@ pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
     if let Some(p) = &physical {
         flags::physical(&mut flags, p.sommerfeld, p.compton_over_b);
     }
+    let (sources, citations) = sources::electromagnetic();
     Ok(EmResult {
         force: "em",
         units: "Gaussian, c = 1",
@@ -85,7 +86,8 @@ pub fn electromagnetic(s: &TwoBodySystem) -> Result<EmResult, InputError> {
         kinematics: *k,
         orders,
         flags,
-        sources: sources::electromagnetic(),
+        sources,
+        citations,
         physical,
         notice: crate::validity::ESTIMATE_NOTICE,
     })

@@ -89,6 +89,7 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
     if let Some(p) = &physical {
         flags::physical(&mut flags, p.sommerfeld, p.compton_over_b);
     }
+    let (sources, citations) = sources::gravity();
     Ok(GravityResult {
         force: "gravity",
         gamma: b.gamma,
@@ -117,7 +118,8 @@ pub fn gravity(s: &TwoBodySystem) -> Result<GravityResult, InputError> {
         kinematics: *k,
         orders,
         flags,
-        sources: sources::gravity(),
+        sources,
+        citations,
         physical,
         notice: crate::validity::ESTIMATE_NOTICE,
     })

@@ -5,7 +5,7 @@ use super::{eob, impulse};
 use crate::two_body::Kinematics;
 use crate::validity::Flag;
 use serde::Serialize;
-use std::collections::BTreeMap;
+use crate::references::{CitationMap, SourceMap};
 
 /// The cumulative PM angles (radians). JSON keys `1pm`, `2pm`, `3pm_conservative`, `3pm`.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -154,7 +154,10 @@ pub struct GravityResult {
     pub kinematics: Kinematics,
     pub orders: Vec<OrderRow>,
     pub flags: Vec<Flag>,
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → citation (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
     pub physical: Option<GravityPhysical>,
     pub notice: &'static str,
 }
@@ -229,7 +232,10 @@ pub struct EmResult {
     pub kinematics: Kinematics,
     pub orders: Vec<OrderRow>,
     pub flags: Vec<Flag>,
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → citation (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
     pub physical: Option<EmPhysical>,
     pub notice: &'static str,
 }

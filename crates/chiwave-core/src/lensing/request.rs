@@ -8,7 +8,6 @@ use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
 use crate::units::{astro::AU, parse_frequency, parse_length, parse_mass, AngleUnit, Length, Mass, Quantity};
 use serde::{Deserialize, Serialize};
-use std::collections::BTreeMap;
 
 /// Point-lens request, as the page and `chiwave lens` send it.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
@@ -96,15 +95,7 @@ impl LensRequest {
         let time_delay_s = 4.0 * gm_z / (C * C * C) * delta_t;
 
         let mut flags = flags::point_lens(theta, gm, r_e, z_l, lens.offset());
-        let mut sources = BTreeMap::new();
-        for k in ["einstein_radius_rad", "einstein_radius_mas", "einstein_radius_au", "einstein_radius_m"] {
-            sources.insert(k, sources::SRC_EINSTEIN);
-        }
-        sources.insert("images", sources::SRC_IMAGES);
-        sources.insert("total_magnification", sources::SRC_IMAGES);
-        sources.insert("time_delay_s", sources::SRC_DELAY);
-        sources.insert("time_delay_dimensionless", sources::SRC_DELAY);
-        sources.insert("mass_msun", "IAU 2015 Resolution B3 nominal (GM)☉ (Prša et al. 2016, arXiv:1605.09788)");
+        let (sources, citations) = sources::lens(frequency.is_some());
 
         let mut result = LensResult {
             einstein_radius_rad: theta,
@@ -130,6 +121,7 @@ impl LensRequest {
             amplification_method: None,
             flags: Vec::new(),
             sources,
+            citations,
         };
 
         if let Some(f) = frequency {
@@ -166,9 +158,6 @@ impl LensRequest {
                 wave::Method::Asymptotic => "asymptotic",
                 wave::Method::GeometricOptics => "geometric_optics",
             });
-            for k in ["w", "amplification", "amplification_abs", "amplification_phase_rad", "amplification_geometric"] {
-                result.sources.insert(k, sources::SRC_WAVE);
-            }
             flags.extend(flags::wave_optics(w, delta_t, a.method));
         }
         result.flags = flags;

@@ -70,6 +70,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
             e_rad_body2_j: e2 * mc2,
         }
     });
+    let (sources, citations) = sources::electromagnetic();
     Ok(EmWaveformResult {
         force: WaveformForce::Em,
         u: c.u.clone(),
@@ -95,7 +96,8 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
         impulse: sys.impulse(),
         units: EM_UNITS,
         flags,
-        sources: sources::electromagnetic(),
+        sources,
+        citations,
         spectrum,
         physical,
     })

@@ -131,6 +131,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
         None
     };
     let peak_abs_h = h_plus.iter().zip(&h_cross).map(|(a, c)| a.hypot(*c)).fold(0.0, f64::max);
+    let (sources, citations) = sources::gravity();
     Ok(GravityWaveformResult {
         u,
         peak_abs_h,
@@ -152,7 +153,8 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
         b_over_gm: b_over_m,
         b_over_m_alias: b_over_m,
         flags,
-        sources: sources::gravity(),
+        sources,
+        citations,
         physical,
         spectrum,
         detector,
