@@ -173,3 +173,34 @@ fn waveform_window_units_projection_and_em_figure() {
     assert!(std::fs::read_to_string(&path).unwrap().contains("D·E_θ"));
     let _ = std::fs::remove_file(&path);
 }
+
+/// `chiwave sources`: the registry as a listing, as BibTeX and as JSON; every id a result cites
+/// is listed; a wrong argument is refused with status 2.
+#[test]
+fn sources_command() {
+    let (code, out, _) = run(&["sources"]);
+    assert_eq!(code, 0);
+    assert!(out.contains("[herrmann2021] Herrmann, Parra-Martinez, Ruf & Zeng 2021, arXiv:2101.07255"), "{out}");
+    let (code, bib, _) = run(&["sources", "--bibtex"]);
+    assert_eq!(code, 0);
+    assert!(bib.is_ascii() && bib.contains("@article{damour2018,\n") && bib.contains("eprint = {1710.10599}"));
+    let reg = json(&["sources", "--json"]);
+    let list = reg.as_array().unwrap();
+    assert_eq!(bib.matches("\n@").count() + 1, list.len());
+    for e in list {
+        for k in ["id", "kind", "authors", "year", "title", "arxiv", "doi", "used_for", "checked", "short", "bibtex"] {
+            assert!(e.get(k).is_some(), "{k} missing in {e}");
+        }
+    }
+    let ids: Vec<&str> = list.iter().map(|e| e["id"].as_str().unwrap()).collect();
+    let w = json(&["encounter", "--m1", "1", "--m2", "3", "--gamma", "1.1", "--b", "100", "--json"]);
+    for (key, cites) in w["citations"].as_object().unwrap() {
+        for c in cites.as_array().unwrap() {
+            assert!(ids.contains(&c["id"].as_str().unwrap()), "{key}: {c}");
+        }
+    }
+    let (code, _, err) = run(&["sources", "--bibtex", "--json"]);
+    assert_eq!(code, 2, "{err}");
+    let (code, _, err) = run(&["sources", "--yaml"]);
+    assert!(code == 2 && err.contains("--yaml"), "{err}");
+}

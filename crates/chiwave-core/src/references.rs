@@ -51,7 +51,7 @@ pub struct Reference {
     pub authors: &'static [&'static str],
     pub year: u16,
     pub title: &'static str,
-    /// Journal (articles) or series.
+    /// Journal (articles), or the series of a book.
     pub journal: Option<&'static str>,
     pub volume: Option<&'static str>,
     /// First page or article number.
@@ -160,22 +160,22 @@ impl Reference {
         }
     }
 
-    /// Where to look it up: "arXiv:id" when there is one, else the journal reference, else the
-    /// publisher (books).
+    /// Where to look it up: "arXiv:id" when there is one, else the journal reference (articles),
+    /// the title, edition and publisher (books) or the book a chapter is in.
     pub fn locator(&self) -> String {
         if let Some(a) = self.arxiv {
             return format!("arXiv:{a}");
         }
-        match (self.journal, self.volume, self.pages) {
-            (Some(j), Some(v), Some(p)) => format!("{j} {v}, {p}"),
-            (Some(j), _, _) => j.to_string(),
-            _ => match (self.booktitle, self.publisher) {
-                (Some(b), _) => format!("in {b}"),
-                (None, Some(p)) => match self.edition {
-                    Some(e) => format!("{}, {e} ed., {p}", self.title),
-                    None => format!("{}, {p}", self.title),
-                },
-                (None, None) => self.title.to_string(),
+        match self.kind {
+            Kind::Book => match self.edition {
+                Some(e) => format!("{}, {e} ed., {}", self.title, self.publisher.unwrap_or("")),
+                None => format!("{}, {}", self.title, self.publisher.unwrap_or("")),
+            },
+            Kind::InCollection => format!("in {}", self.booktitle.unwrap_or(self.title)),
+            Kind::Article | Kind::Misc => match (self.journal, self.volume, self.pages) {
+                (Some(j), Some(v), Some(p)) => format!("{j} {v}, {p}"),
+                (Some(j), _, _) => j.to_string(),
+                _ => self.title.to_string(),
             },
         }
     }
@@ -239,11 +239,12 @@ impl Reference {
         if let Some(e) = self.editors {
             f.push(("editor", latex(e)));
         }
+        let book = matches!(self.kind, Kind::Book);
         if let Some(j) = self.journal {
-            f.push(("journal", latex(j)));
+            f.push((if book { "series" } else { "journal" }, latex(j)));
         }
         if let Some(v) = self.volume {
-            f.push(("volume", v.to_string()));
+            f.push((if book { "number" } else { "volume" }, v.to_string()));
         }
         if let Some(p) = self.pages {
             f.push(("pages", p.to_string()));
@@ -317,6 +318,21 @@ pub fn all() -> &'static [Reference] {
 /// The reference with this id.
 pub fn get(id: &str) -> Option<&'static Reference> {
     REFERENCES.iter().find(|r| r.id == id)
+}
+
+/// One registry entry as the CLI's `sources --json` and the page's References panel get it:
+/// every field of the [`Reference`], its short citation and its BibTeX entry.
+#[derive(Debug, Clone, PartialEq, Eq, Serialize)]
+pub struct Listed {
+    #[serde(flatten)]
+    pub reference: &'static Reference,
+    pub short: String,
+    pub bibtex: String,
+}
+
+/// The whole registry with short citations and BibTeX, ordered by id.
+pub fn listing() -> Vec<Listed> {
+    REFERENCES.iter().map(|r| Listed { reference: r, short: r.short(), bibtex: r.bibtex() }).collect()
 }
 
 /// All BibTeX entries, separated by blank lines.
