@@ -44,7 +44,7 @@ pub const EXACT_STEP_BUDGET: f64 = 60_000.0;
 /// use chiwave_core::lensing::wave::dimensionless_frequency;
 /// use chiwave_core::units::iau2015::GM_SUN;
 /// // For 1 M☉, w = 1 at f = c³/(8π G M) = 8078.1 Hz (evaluated by hand with IAU 2015
-/// nominal GM☉).
+/// // nominal GM☉).
 /// let w = dimensionless_frequency(GM_SUN, 8078.1);
 /// assert!((w - 1.0).abs() < 1e-5);
 /// ```
@@ -328,7 +328,7 @@ pub struct AmplificationCurve {
 /// use chiwave_core::lensing::wave::amplification_curve;
 /// let c = amplification_curve(0.0, 0.01, 100.0, 5).unwrap();
 /// // At y = 0, |F|² = πw/(1 − e^{−πw}) (Takahashi & Nakamura 2003, y = 0 limit); at w = 100
-/// that is 100π.
+/// // that is 100π.
 /// assert!((c.abs[4].powi(2) / (100.0 * std::f64::consts::PI) - 1.0).abs() < 1e-10);
 /// ```
 pub fn amplification_curve(y: f64, w_min: f64, w_max: f64, n: usize) -> Result<AmplificationCurve, InputError> {
