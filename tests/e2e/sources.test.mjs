@@ -13,26 +13,26 @@ let page;
 before(async () => { ({ page } = await ui.ready); });
 
 // Assembled from pieces so that this file does not match the repository scan.
-const SHEET = ['sh', 'eet'].join('');
-const PIT = ['pit', 'fall'].join('');
-const BRIEF = ['bri', 'ef'].join('');
+const W_SHEET = ['sh', 'eet'].join('');
+const W_PIT = ['pit', 'fall'].join('');
+const W_BRIEF = ['bri', 'ef'].join('');
 
 /** The offending phrase in `text`, or null (the patterns of the Rust test). */
 export function forbidden(text) {
   const low = text.toLowerCase();
   const around = (i) => low.slice(Math.max(0, i - 30), i + 40).replace(/\n/g, ' ');
-  for (let i = low.indexOf(SHEET); i >= 0; i = low.indexOf(SHEET, i + 1)) {
+  for (let i = low.indexOf(W_SHEET); i >= 0; i = low.indexOf(W_SHEET, i + 1)) {
     const before = low.slice(0, i);
-    const after = low.slice(i + SHEET.length);
+    const after = low.slice(i + W_SHEET.length);
     const named = ['deflection ', 'encounter ', 'waveform ', 'reference ', 'the '].some((w) => before.endsWith(w));
     const rest = after.replace(/^['’]/, '').replace(/^s/, '').replace(/^ /, '');
     if (named || /^[§0-9]/.test(rest) || /^['’]s/.test(after)) return around(i);
   }
-  for (let i = low.indexOf(PIT); i >= 0; i = low.indexOf(PIT, i + 1)) {
-    if (/^ ?[0-9§]/.test(low.slice(i + PIT.length)) || low[i - 1] === '(') return around(i);
+  for (let i = low.indexOf(W_PIT); i >= 0; i = low.indexOf(W_PIT, i + 1)) {
+    if (/^ ?[0-9§]/.test(low.slice(i + W_PIT.length)) || low[i - 1] === '(') return around(i);
   }
-  for (let i = low.indexOf(BRIEF); i >= 0; i = low.indexOf(BRIEF, i + 1)) {
-    if (/^[:/]/.test(low.slice(i + BRIEF.length)) || low[i - 1] === '(') return around(i);
+  for (let i = low.indexOf(W_BRIEF); i >= 0; i = low.indexOf(W_BRIEF, i + 1)) {
+    if (/^[:/]/.test(low.slice(i + W_BRIEF.length)) || low[i - 1] === '(') return around(i);
   }
   return null;
 }
@@ -54,9 +54,9 @@ function readable() {
 }
 
 test('the matcher catches a numbered or named internal note and nothing ordinary', () => {
-  assert.ok(forbidden(`see the deflection ${SHEET} §1`));
-  assert.ok(forbidden(`(${PIT} 8)`));
-  assert.ok(forbidden(`(${BRIEF})`));
+  assert.ok(forbidden(`see the deflection ${W_SHEET} §1`));
+  assert.ok(forbidden(`(${W_PIT} 8)`));
+  assert.ok(forbidden(`(${W_BRIEF})`));
   assert.equal(forbidden('stylesheet, briefly, a brief note'), null);
 });
 

@@ -30,7 +30,7 @@ fn forbidden(text: &str) -> Option<String> {
         let before = &low[..at];
         let after = &low[at + sheet.len()..];
         let named = ["deflection ", "encounter ", "waveform ", "reference ", "the "].iter().any(|w| before.ends_with(w));
-        // "sheet §", "sheet 1", "sheets 2", "sheet's", "sheet’s"
+        // followed by a section sign or a number (optionally after "s" and a space), or possessive
         let rest = after.strip_prefix('\'').or_else(|| after.strip_prefix('’')).unwrap_or(after);
         let rest = rest.strip_prefix('s').unwrap_or(rest);
         let rest = rest.strip_prefix(' ').unwrap_or(rest);

@@ -594,6 +594,18 @@ static REFERENCES: &[Reference] = &[
         ..ART
     },
     Reference {
+        id: "damour1988",
+        authors: &["Damour, T.", "Schäfer, G."],
+        year: 1988,
+        title: "Higher-order relativistic periastron advances and binary pulsars",
+        journal: Some("Nuovo Cimento B"),
+        volume: Some("101"),
+        pages: Some("127"),
+        used_for: "Hadamard's finite part in the expansion of orbit integrals (generation of the test-body PM coefficients)",
+        checked: OLD_NOTE,
+        ..ART
+    },
+    Reference {
         id: "damour2014",
         authors: &["Damour, Thibault", "Guercilena, Federico", "Hinder, Ian", "Hopper, Seth", "Nagar, Alessandro", "Rezzolla, Luciano"],
         year: 2014,
