@@ -2,12 +2,13 @@
 """Reference values for crates/chiwave-core/tests/deflection*.rs (mpmath 1.3, mp.dps = 40).
 
 Independent of the Rust code paths:
-  * Schwarzschild: Darwin's closed form with mpmath ellipk/ellipf (parameter m = k^2), and the
-    sheet's quadrature A (theta-form) with mp.quad, which must agree.
-  * Kerr equatorial: the Boyer-Lindquist r-integral (deflection sheet section 2) with the cubic
+  * Schwarzschild: Darwin's closed form (Darwin 1959) with mpmath ellipk/ellipf (parameter
+    m = k^2), and the theta-form quadrature (docs/physics/deflection.md section 2) with mp.quad,
+    which must agree.
+  * Kerr equatorial: the Boyer-Lindquist r-integral (Carter 1968 equations) with the cubic
     factored exactly, r = r0 + v^2, mp.quad on [0, inf]  (the Rust code uses a theta-form).
   * Reissner-Nordstrom: the u-integral with P(u) = (u0 - u) H(u) factored, u = u0 - w^2.
-  * Weak-field coefficients c_n: the sheet's derivation (I_n integrals + reversion of
+  * Weak-field coefficients c_n: the derivation of docs/physics/deflection.md section 3 (I_n integrals + reversion of
     M/b = h sqrt(1 - 2h)), done with mpmath series arithmetic (the Rust code expands the
     theta-integrand instead).
 Run: python3 tests/reference/deflection_mpmath.py
@@ -132,6 +133,17 @@ def main():
     print("GM/c^2 =", mp.nstr(m, 20), "m")
     print("4M/b arcsec =", mp.nstr(4 * m / R * 648000 / mp.pi, 20))
     print("exact arcsec =", mp.nstr(darwin(R / m) * 648000 / mp.pi, 20))
+    print("## Solar System and a neutron star (IAU 2015 Resolution B3 nominal values)")
+    arcsec = 648000 / mp.pi
+    print("Sun 4M/R rad =", mp.nstr(4 * m / R, 20), " M/R =", mp.nstr(m / R, 12))
+    print("Sun PPN gamma = 1 + 2.1e-5, arcsec =", mp.nstr((2 + mp.mpf("2.1e-5")) / 2 * 4 * m / R * arcsec, 20))
+    r0 = R / m
+    print("Sun exact GR with r0 = R, arcsec =", mp.nstr(darwin(r0 / mp.sqrt(1 - 2 / r0)) * arcsec, 20))
+    mns = mp.mpf("1.4") * m; r0 = mp.mpf(12000) / mns; b = r0 / mp.sqrt(1 - 2 / r0)
+    print("neutron star 1.4 Msun, r0 = 12 km: b =", mp.nstr(b * mns, 20), "m, alpha =", mp.nstr(darwin(b), 20), "rad")
+    for name, gm, rad in [("Jupiter", "1.2668653e17", "7.1492e7"), ("Earth", "3.986004e14", "6.3781e6")]:
+        a = 4 * mp.mpf(gm) / c ** 2 / mp.mpf(rad)
+        print(f"{name} limb PPN gamma = 1: {mp.nstr(a, 20)} rad = {mp.nstr(a * arcsec * 1000, 20)} mas")
 
 
 if __name__ == "__main__":

@@ -4,10 +4,11 @@
 mpmath 1.3.0, mp.dps = 40.  Run:  python3 tests/reference/encounter_mpmath.py
 
 Every value here is computed by a method independent of the Rust code path:
-  * E(gamma) of Herrmann, Parra-Martinez, Ruf, Zeng 2021 (arXiv:2101.07255; encounter sheet 3.1)
+  * E(gamma) of Herrmann, Parra-Martinez, Ruf, Zeng 2021 (arXiv:2101.07255)
     evaluated in 40-digit arithmetic (no cancellation problem), and its small-velocity series
     obtained by Cauchy-integral Taylor coefficients (mp.taylor, method='quad').
-  * I(v) of Damour 2020 (arXiv:2010.01641; sheet 1.4) and Cbar(gamma) (sheet 1.3) in 40 digits.
+  * I(v) of Damour 2020 (arXiv:2010.01641) and Cbar(gamma) (Bern et al. 2019, arXiv:1901.04424, in the
+    mass-polynomial form of Damour 2020, arXiv:1912.02139) in 40 digits.
   * Test-body Schwarzschild scattering angle by tanh-sinh quadrature of the raw orbit integral
     (roots from mp.polyroots), not the factorised/sinh-substituted form used in Rust.
   * Darwin (relativistic Coulomb, test charge) angle by quadrature of the raw orbit integral.
@@ -55,7 +56,7 @@ def jcrit(g):
 
 
 def chi_test_body(g, j):
-    """chi = 2 int_0^{u0} du / sqrt(P(u)) - pi, P = [g^2 - (1-2u)(1+j^2 u^2)]/j^2 (sheet 5.2)."""
+    """chi = 2 int_0^{u0} du / sqrt(P(u)) - pi, P = [g^2 - (1-2u)(1+j^2 u^2)]/j^2 (Chandrasekhar 1983, ch. 3)."""
     g, j = mpf(g), mpf(j)
     P = lambda u: (g**2 - (1 - 2*u) * (1 + j**2 * u**2)) / j**2
     roots = polyroots([2, -1, 2 / j**2, (g**2 - 1) / j**2], maxsteps=200, extraprec=200)
@@ -66,7 +67,7 @@ def chi_test_body(g, j):
 
 def chi_darwin_quad(g, kappa):
     """Test charge (m = 1) in a fixed Coulomb field k/r, k = kappa J, J = p b (b = 1):
-    (du/dphi)^2 = [p^2 - 2 g k u - (J^2 - k^2) u^2]/J^2 (deflection sheet 6); chi = Dphi - pi."""
+    (du/dphi)^2 = [p^2 - 2 g k u - (J^2 - k^2) u^2]/J^2 (Landau & Lifshitz, Classical Theory of Fields, sec. 39); chi = Dphi - pi."""
     g, kappa = mpf(g), mpf(kappa)
     p = sqrt(g * g - 1)
     J = p

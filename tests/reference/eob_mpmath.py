@@ -1,12 +1,13 @@
 """Reference values for crates/chiwave-core/tests/eob.rs (mpmath 1.3, mp.dps = 40).
 
 Independent of the Rust code path: the angle coefficients are evaluated from the published
-formulas (encounter sheet §1.1-1.4), the potential coefficients from the low-order map written out
+formulas (Damour 2016, arXiv:1609.00354; Bini & Damour 2017, arXiv:1706.06877; Bern et al. 2019,
+arXiv:1901.04424; Damour 2020, arXiv:2010.01641), the potential coefficients from the low-order map written out
 by hand (chi_1 = w1/(2p), chi_2 = pi w2/4, chi_3 = p w3 + w1 w2/(2p) - w1^3/(24 p^3),
 chi_4 = (3 pi/8)(p^2 w4 + w1 w3 + w2^2/2)), the turning point by mpmath.polyroots and the angle
 by tanh-sinh quadrature (mpmath.quad) after u = u0 (1 - s^2).
 
-Exact Schwarzschild test-body angle (sheet §5.2): Schwarzschild radial variable u = GM/r,
+Exact Schwarzschild test-body angle (Chandrasekhar 1983, ch. 3): Schwarzschild radial variable u = GM/r,
 (du/dphi)^2 = [gamma^2 - (1 - 2u)(1 + j^2 u^2)]/j^2, chi = 2 int_0^{u0} du/sqrt(.) - pi.
 
 Run: python3 tests/reference/eob_mpmath.py
@@ -17,7 +18,7 @@ mp.dps = 40
 
 
 def chis(g, nu, rad=True):
-    """chi_1..chi_3 (sheet §1.1-1.4), chi_3 conservative or conservative + radiative."""
+    """chi_1..chi_3 (papers above), chi_3 conservative or conservative + radiative."""
     g = mpf(g); nu = mpf(nu)
     p = sqrt(g * g - 1); h = sqrt(1 + 2 * nu * (g - 1)); v = p / g
     c1 = (2 * g * g - 1) / p

@@ -4,7 +4,7 @@
 Independent of the Rust code: mpmath's own hyp1f1 and gamma (its hypercomb/asymptotic machinery),
 not the series + Taylor continuation used in chiwave-core.
 
-Point-lens amplification factor (Takahashi & Nakamura 2003, astro-ph/0305055; deflection sheet §4):
+Point-lens amplification factor (Takahashi & Nakamura 2003, astro-ph/0305055):
   F(w, y) = exp[pi w/4 + i (w/2)(ln(w/2) - 2 phi_m)] Gamma(1 - i w/2) 1F1(i w/2; 1; i w y^2/2),
   x_m = (y + sqrt(y^2 + 4))/2, phi_m = (x_m - y)^2/2 - ln x_m.
 Run: python3 tests/reference/lensing_mpmath.py
@@ -45,3 +45,14 @@ if __name__ == "__main__":
             (1.0, 100.0), (10.0, 30.0), (100.0, 20.0), (1000.0, 30.0), (0.01, 6000.0)]
     for w, y in grid:
         show(f"F({w}, {y})", F(w, y))
+    print("# point lens, worked example: M = 0.3 GM_sun/G (IAU 2015 B3), D_L = 4 kpc, D_S = 8 kpc, u = 0.5")
+    au = mp.mpf(149597870700); kpc = 1000 * 648000 / mp.pi * au
+    gm = mp.mpf("0.3") * mp.mpf("1.3271244e20"); c = mp.mpf(299792458)
+    dl, ds = 4 * kpc, 8 * kpc
+    te = mp.sqrt(4 * gm * (ds - dl) / (c ** 2 * dl * ds))
+    print("theta_E =", mp.nstr(te, 15), "rad =", mp.nstr(te * 648000e3 / mp.pi, 15), "mas; R_E =", mp.nstr(te * dl / au, 15), "au")
+    u = mp.mpf("0.5"); r = mp.sqrt(u * u + 4)
+    mup, mum = (u * u + 2) / (2 * u * r) + mp.mpf(1) / 2, -((u * u + 2) / (2 * u * r) - mp.mpf(1) / 2)
+    print("mu+ =", mp.nstr(mup, 15), "mu- =", mp.nstr(mum, 15), "mu_tot =", mp.nstr(mup - mum, 15))
+    print("w = 8 pi G M f/c^3 for 1 M_sun at 100 Hz:", mp.nstr(8 * mp.pi * mp.mpf("1.3271244e20") * 100 / c ** 3, 6),
+          "; w = 1 at f =", mp.nstr(c ** 3 / (8 * mp.pi * mp.mpf("1.3271244e20")), 6), "Hz")

@@ -1,6 +1,6 @@
 """Reference values for the O(G^3) radiated energy function E(gamma) of Herrmann, Parra-Martinez,
-Ruf & Zeng 2021 (arXiv:2101.07255), in the waveform sheet's section-4 form (8 in the f3 denominator,
-1/(2 sqrt(g^2-1)) on the last term).  Used by chiwave-core waveform tests.
+Ruf & Zeng 2021 (arXiv:2101.07255), in the form with 8 in the f3 denominator and
+1/(2 sqrt(g^2-1)) on the last term (equivalent to the form with 16 and 1/sqrt(g^2-1)).  Used by chiwave-core waveform tests.
 
 Prints (1) E(gamma) at test points with mpmath 1.3 at mp.dps = 40, and (2) the exact rational
 coefficients of the low-velocity series E/pi = sum c_k v^(2k+1), computed with sympy.

@@ -2,6 +2,7 @@
 import { el, installTooltips, download } from './util.js';
 import { makeView } from './viewkit.js';
 import { loadCore, info, checkScenario } from './core.js';
+import { installReferences } from './references.js';
 import { VIEWS } from './views/index.js';
 import { SCENARIOS } from '../pkg/scenarios.js';
 
@@ -75,6 +76,7 @@ async function start() {
     }
   });
   installTooltips(document.body);
+  installReferences(document.getElementById('references-open'));
 
   for (const s of SCENARIOS) pick.append(el('option', { value: s.stem, text: `${s.name} (${s.request.kind})` }));
   pick.addEventListener('change', () => {

@@ -48,6 +48,12 @@ export function evaluateView({ request, resultRequest = request, figures = [] })
   return { result, figures: drawn };
 }
 
+/** Every reference the core uses, `[{id, short, authors, year, title, arxiv, doi, used_for,
+ *  bibtex, …}]`. FALLBACK for cores without `references()`: an empty list (no BibTeX offered). */
+export function references() {
+  return typeof glue.references === 'function' ? glue.references() : [];
+}
+
 /** Validates a scenario object; returns {name, description, request} or throws. */
 export function checkScenario(scenario) {
   return glue.check_scenario(scenario);

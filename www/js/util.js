@@ -92,7 +92,7 @@ function showTip(target) {
   if (!tip) tip = document.getElementById('tooltip');
   const src = target.getAttribute('data-source');
   if (!tip || !src) return;
-  tip.replaceChildren(el('b', { text: target.getAttribute('data-tip-label') || 'Source: ' }), src);
+  tip.replaceChildren(el('b', { text: target.getAttribute('data-tip-label') || 'Source: ' }), src, el('div', { class: 'tip-hint', text: 'Click or press Enter: BibTeX of its references' }));
   tip.hidden = false;
   const r = target.getBoundingClientRect();
   const w = Math.min(480, window.innerWidth - 16);

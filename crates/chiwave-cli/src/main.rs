@@ -5,6 +5,7 @@
 //! exits with status 2 and one line on stderr naming the option and the allowed range.
 
 mod args;
+mod sources;
 mod table;
 
 use args::{Format, Parsed};
@@ -27,6 +28,7 @@ commands
   waveform    leading-order gravitational or electromagnetic waveform at a detector
   scenario    evaluate a scenario: chiwave scenario NAME|FILE.json
   scenarios   list the built-in demo scenarios
+  sources     every reference the tool uses (--bibtex: all BibTeX entries, --json: the registry)
   help        this text, or `chiwave help COMMAND`
 
 Quantities take a unit suffix (1Msun, 6.957e8m, 4kpc, 1000km/s, 100Hz); a bare number is
@@ -52,6 +54,7 @@ fn command_help(cmd: &str) -> Option<&'static str> {
              [--force em --q1 Q1 --q2 Q2] [--json|--csv]
              [--svg FILE --figure strain|sky|sky_memory|spectrum|slow_motion [--projection cylindrical|equal_area]]",
         "scenario" => "chiwave scenario NAME|FILE.json [--json|--csv]   (see `chiwave scenarios`)",
+        "sources" => sources::HELP,
         _ => return None,
     })
 }
@@ -184,6 +187,9 @@ fn load_scenario(name: &str) -> Result<Scenario, Failure> {
 }
 
 fn run(argv: &[String]) -> Result<String, Failure> {
+    if argv.first().map(String::as_str) == Some("sources") {
+        return sources::run(&argv[1..]).map_err(input_failure);
+    }
     let p = args::parse(argv).map_err(input_failure)?;
     match p.command.as_str() {
         "help" | "--help" | "-h" => Ok(match p.positional.first().and_then(|c| command_help(c)) {

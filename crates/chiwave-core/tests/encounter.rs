@@ -27,13 +27,16 @@ fn chi_exact(g: f64, j: f64) -> Option<f64> {
 }
 
 #[test]
-fn generated_test_body_coefficients_match_sheet() {
-    // Encounter sheet §1.1–§1.5 closed forms (VERIFIED there by quadrature at 20 digits).
+fn generated_test_body_coefficients_match_closed_forms() {
+    // Closed forms of the test-body coefficients: χ₁–χ₃ the ν → 0 limits of Damour 2016
+    // (arXiv:1609.00354), Bini & Damour 2017 (arXiv:1706.06877) and Bern et al. 2019
+    // (arXiv:1901.04424); χ₄ Damour 2020 (arXiv:1912.02139); χ₅, χ₆ from a high-precision fit of
+    // the exact quadrature with integer-relation identification (recalled from memory).
     for g in [1.0001, 1.01, 1.1, 1.5, 3.0, 10.0, 100.0] {
         let b = RelativeSpeed::from_gamma(g).unwrap();
         let p = b.p_inf;
         let (g2, p2) = (g * g, p * p);
-        let sheet = [
+        let closed = [
             (2.0 * g2 - 1.0) / p,
             3.0 * PI / 8.0 * (5.0 * g2 - 1.0),
             (64.0 * p2.powi(3) + 72.0 * p2 * p2 + 12.0 * p2 - 1.0) / (3.0 * p * p2),
@@ -41,15 +44,15 @@ fn generated_test_body_coefficients_match_sheet() {
             (1792.0 * p2.powi(5) + 3200.0 * p2.powi(4) + 1600.0 * p2.powi(3) + 160.0 * p2 * p2 - 10.0 * p2 + 1.0) / (5.0 * p2 * p2 * p),
             1155.0 * PI / 512.0 * (221.0 * g2.powi(3) - 195.0 * g2 * g2 + 39.0 * g2 - 1.0),
         ];
-        for (n, want) in sheet.iter().enumerate() {
+        for (n, want) in closed.iter().enumerate() {
             let got = testbody::pm_coefficient(n + 1, &b).unwrap();
             // 1e-11: the generated sum has alternating terms ~p^{-n} at γ = 1.0001 (cancellation ≈ 10²).
             assert!(rel_diff(got, *want) < 1e-11, "γ={g} n={}: {got} vs {want}", n + 1); // alternating p^-n terms at γ = 1.0001 (line above)
         }
-        // The test-body ν → 0 limit of the two-body coefficients is the same (sheet §1.1–§1.3).
+        // The test-body ν → 0 limit of the two-body coefficients is the same (same papers).
         let c = pm::coefficients(&b, 0.0);
-        assert!(rel_diff(c[0], sheet[0]) < REL_ROUNDING && rel_diff(c[1], sheet[1]) < REL_ROUNDING);
-        assert!(rel_diff(c[2], sheet[2]) < REL_ROUNDING && c[3] == 0.0);
+        assert!(rel_diff(c[0], closed[0]) < REL_ROUNDING && rel_diff(c[1], closed[1]) < REL_ROUNDING);
+        assert!(rel_diff(c[2], closed[2]) < REL_ROUNDING && c[3] == 0.0);
     }
     assert!(testbody::pm_coefficient(0, &RelativeSpeed::from_gamma(2.0).unwrap()).is_none());
     assert!(testbody::pm_coefficient(13, &RelativeSpeed::from_gamma(2.0).unwrap()).is_none());
@@ -92,18 +95,20 @@ fn pm_series_converges_to_quadrature() {
 
 #[test]
 fn capture_threshold() {
-    // mpmath 1.3, dps 40 (tests/reference/encounter_mpmath.py): jcrit from the sheet's r_c formula.
+    // mpmath 1.3, dps 40 (tests/reference/encounter_mpmath.py): jcrit from the r_c of the unstable
+    // circular orbit (Misner, Thorne & Wheeler 1973, §25.5).
     for (g, want) in [(1.1, 4.724555912615340340181), (1.5, 7.155417527999327028509), (2.0, 9.935828658942964968976), (10.0, 51.8747526167417415118)] {
         let b = RelativeSpeed::from_gamma(g).unwrap();
         let jc = testbody::critical_j(&b);
         assert!(rel_diff(jc, want) < REL_ROUNDING * 10.0, "γ={g}");
-        // Bracketing (deflection sheet §5): a turning point just above, none just below.
+        // Bracketing: a turning point just above, none just below (independent of the formula).
         assert!(chi_exact(g, jc * (1.0 + 1e-7)).is_some(), "γ={g} above");
         assert!(chi_exact(g, jc * (1.0 - 1e-9)).is_none(), "γ={g} below");
     }
-    // Encounter sheet pitfall 8: γ = 10, j = 50 is captured.
+    // γ = 10, j = 50 (b ≈ 5 GM/c² < 3√3 GM/c²) is captured (Chandrasekhar 1983, ch. 3).
     assert!(chi_exact(10.0, 50.0).is_none());
-    // Limits (deflection sheet §5): γ → 1: j_c → 4; γ → ∞: j_c/p∞ → 3√3.
+    // Limits of the Schwarzschild capture threshold (Chandrasekhar 1983, ch. 3): γ → 1: j_c → 4;
+    // γ → ∞: j_c/p∞ → 3√3.
     assert!((testbody::critical_j(&RelativeSpeed::from_v(1e-6).unwrap()) - 4.0).abs() < 1e-9); // j_c = 4 + O(v²) at v = 1e-6, absolute
     let b = RelativeSpeed::from_gamma(1e6).unwrap();
     assert!(rel_diff(testbody::critical_j(&b) / b.p_inf, 27f64.sqrt()) < 1e-9); // j_c/p∞ = 3√3 + O(1/γ²) at γ = 1e6
@@ -116,7 +121,7 @@ fn capture_threshold() {
 
 #[test]
 fn newtonian_limit() {
-    // Deflection sheet §5: at v = 1e-3, b = 1e6 M (χ_N = π/2) the exact test-body angle differs
+    // Landau & Lifshitz, *Mechanics*, §19: at v = 1e-3, b = 1e6 M (χ_N = π/2) the exact test-body angle differs
     // from the Newtonian 2 arctan(M/(b v²)) by O(v²).
     let b = RelativeSpeed::from_v(1e-3).unwrap();
     let k = Kinematics::new(1e-9, 1.0, b, Orbit::B(1e6)).unwrap();
@@ -127,7 +132,7 @@ fn newtonian_limit() {
     let newt = pm::chi_newtonian(1e6, 1e-3);
     assert!((newt - PI / 2.0).abs() < 1e-15); // 2 arctan 1 = π/2 (elementary)
     assert!((ex - newt).abs() < 20.0 * 1e-6 && (ex - newt).abs() > 1e-8, "{}", ex - newt); // O(v²) = 1e-6 with a coefficient below 20, and not zero
-    // PN limits of the coefficients (sheet §5.1): χ₁ p → 1, χ₃ p³ → −1/3.
+    // PN limits of the coefficients (expansion of the Kepler angle 2 arctan(1/(v j))): χ₁ p → 1, χ₃ p³ → −1/3.
     let b = RelativeSpeed::from_v(1e-5).unwrap();
     let c = pm::coefficients(&b, 0.25);
     assert!((c[0] * b.p_inf - 1.0).abs() < 1e-9); // χ₁ p∞ = 1 + O(v²) at v = 1e-5
@@ -145,7 +150,8 @@ fn cbar_and_i_match_mpmath() {
         // 1e-11 at γ − 1 = 1e-6: γ itself carries a 1e-16/1e-6 relative error in γ − 1.
         assert!(rel_diff(got, want) < 1e-11, "γ={g}: {got} vs {want}"); // γ − 1 = 1e-6 carries 1e-10 relative rounding (line above)
     }
-    // Sheet §1.3 series check: C̄ = 4 + 18p² + (91/10)p⁴ + O(p⁶).
+    // Series of C̄ at small p (Taylor expansion of the closed form, recalled from memory):
+    // C̄ = 4 + 18p² + (91/10)p⁴ + O(p⁶).
     let b = RelativeSpeed::from_v(1e-2).unwrap();
     let p2 = b.p_inf * b.p_inf;
     assert!(((pm::cbar(&b) - 4.0 - 18.0 * p2) / (p2 * p2) - 9.1).abs() < 0.05); // the O(p²) remainder at p ≈ 1e-2 is ~1e-4 of 9.1, plus cancellation in C̄ − 4 − 18p²
@@ -196,7 +202,8 @@ fn series_switch_is_continuous() {
     let (ib, ia) = (radiated::i_function(below), radiated::i_function(vs));
     assert!(rel_diff(ib, ia) < 1e-12, "{ib} {ia}"); // as for E: the two sides of the switch
     assert!(rel_diff(ia, 0.1519028838317368669578) < REL_ROUNDING);
-    // The closed forms written out here independently (sheet §1.4, §3.1) agree with the series
+    // The closed forms written out here independently (Damour 2020, arXiv:2010.01641 for I(v);
+    // Herrmann et al. 2021, arXiv:2101.07255 for E(γ)) agree with the series
     // just below the switch to 1e-12.
     let v: f64 = 0.29;
     let g = 1.0 / (1.0 - v * v).sqrt();
@@ -212,25 +219,28 @@ fn series_switch_is_continuous() {
 
 #[test]
 fn small_velocity_limits() {
-    // Encounter sheet §3.1: E/(π v) → 37/15 (Newtonian quadrupole on a straight line).
+    // Herrmann et al. 2021 (arXiv:2101.07255) E(γ) at small v (tests/reference/encounter_mpmath.py):
+    // E/(π v) → 37/15 (Newtonian quadrupole on a straight line).
     let b = RelativeSpeed::from_v(1e-5).unwrap();
     assert!(rel_diff(radiated::e_of_speed(&b) / (PI * b.v), 37.0 / 15.0) < 1e-9); // E/(πv) = 37/15 + O(v²), v = 1e-5
-    // Sheet §3.1 next PN coefficients 2393/840 v³ (from the formula, matching the PN series).
+    // Next coefficient 2393/840 v³ (the Taylor series of E(γ), tests/reference/encounter_mpmath.py).
     let b = RelativeSpeed::from_v(1e-2).unwrap();
     let e = radiated::e_of_speed(&b) / PI;
     assert!(((e - 37.0 / 15.0 * b.v) / b.v.powi(3) - 2393.0 / 840.0).abs() < 1e-3); // next term O(v²) = 1e-4 relative to 2393/840, plus rounding /v³
-    // Sheet §3.2: J_rad → (16/5) G² m1² m2² v²/(M b) (straight-line quadrupole integral).
+    // Damour 2020 (arXiv:2010.01641), slow limit: J_rad → (16/5) G² m1² m2² v²/(M b) (the
+    // quadrupole formula on the straight line).
     let r = grav(r#"{"m1": 1, "m2": 3, "v": 1e-4, "b": 1e12}"#);
     let (nu, v, bb) = (r.nu, r.kinematics.speed.v, r.b_over_gm);
     let j_rad = r.j_rad * r.kinematics.j_total;
     assert!(rel_diff(j_rad, 16.0 / 5.0 * nu * nu * v * v / bb) < 1e-7, "{}", j_rad / (16.0 / 5.0 * nu * nu * v * v / bb)); // O(v²) = 1e-8 corrections at v = 1e-4
-    // and E_rad → (37π/15) G³ m1² m2² v/b³ (sheet §3.1), h → 1.
+    // and E_rad → (37π/15) G³ m1² m2² v/b³ (Herrmann et al. 2021, slow limit), h → 1.
     assert!(rel_diff(r.e_rad, 37.0 * PI / 15.0 * nu * nu * v / bb.powi(3)) < 1e-7); // O(v²) and h − 1 = O(ν v²) corrections
 }
 
 #[test]
 fn high_energy_limit() {
-    // Encounter sheet §1.4: at fixed j, χ₃(total)/γ³ → 16/3 for any ν (Amati–Ciafaloni–Veneziano
+    // Damour 2020 (arXiv:2010.01641) and Di Vecchia et al. 2020 (arXiv:2008.12743): at fixed j,
+    // χ₃(total)/γ³ → 16/3 for any ν (Amati–Ciafaloni–Veneziano
     // massless eikonal), while χ₃^cons/γ³ ~ −8 ln(2γ).
     for nu in [0.25, 0.1, 0.01] {
         let mut prev = f64::INFINITY;
@@ -255,7 +265,7 @@ fn high_energy_limit() {
 
 #[test]
 fn mass_polynomiality() {
-    // Damour 2019 (arXiv:1912.02139; sheet §1.3): h²χ₃ is linear in ν; hχ₂ is ν-independent.
+    // Damour 2019 (arXiv:1912.02139): h²χ₃ is linear in ν; hχ₂ is ν-independent.
     for g in [1.05, 1.5, 4.0] {
         let b = RelativeSpeed::from_gamma(g).unwrap();
         let f = |nu: f64| {
@@ -277,7 +287,7 @@ fn impulse_for(m1: f64, m2: f64, g: f64, b: f64) -> GravityResult {
 
 #[test]
 fn impulse_on_shell_and_exact_conservative() {
-    // Encounter sheet §2.1 checks (m1 = 1, m2 = 3, γ = 1.1, 1.5, 10; b = 100 … 800): on-shell
+    // On-shell checks of docs/physics/encounter.md §4 (m1 = 1, m2 = 3, γ = 1.1, 1.5, 10; b = 100 … 800): on-shell
     // residuals and deviations from p(cos χ − 1), −p sin χ fall off like b⁻⁴.
     for g in [1.1, 1.5, 10.0] {
         let mut scaled = Vec::new();
@@ -296,7 +306,8 @@ fn impulse_on_shell_and_exact_conservative() {
             scaled.push((res * b.powi(4), dl * b.powi(4), dt * b.powi(4)));
             // CM energy of body 1 is conserved by the conservative impulse (to rounding).
             assert!(c.energy.abs() < 1e-16 * (1.0 + k.p_cm), "γ={g} b={b}: {}", c.energy); // energy conservation is built in: rounding of the CM kinematics
-            // Radiative: body 1 loses the fraction m2/M of E_rad in the CM frame (sheet §2.1, DERIVED).
+            // Radiative: body 1 loses the fraction m2/M of E_rad in the CM frame (P_rad ∝ u₁ + u₂,
+            // Herrmann et al. 2021; docs/physics/encounter.md §4).
             assert!(rel_diff(-r.impulse.cm.energy, k.m2 * r.e_rad) < 1e-9, "γ={g} b={b}"); // exact split; the conservative O(G²) parts cancel in the energy and cost digits
             // Attraction: transverse kick towards body 2.
             assert!(r.impulse.cm.transverse < 0.0); // attraction: the kick points to body 2
@@ -323,7 +334,7 @@ fn exchange_symmetry() {
     assert!(rel_diff(ca.transverse, cb.transverse) < REL_ROUNDING);
     assert!(rel_diff(ca.longitudinal, cb.longitudinal) < 1e-12); // longitudinal part is O(G²): differences of O(1) terms, cancellation of ~1e2
     assert!(rel_diff(a.p_rad_cm, -b.p_rad_cm) < REL_ROUNDING && a.p_rad_cm != 0.0);
-    // Equal masses: no recoil (sheet §3.1).
+    // Equal masses: no recoil (P_rad ∝ u₁ + u₂, Herrmann et al. 2021, arXiv:2101.07255).
     assert_eq!(impulse_for(2.0, 2.0, 1.7, 150.0).p_rad_cm, 0.0);
 }
 
@@ -345,7 +356,7 @@ fn result_keys_and_request_enum() {
     }
     // ν = 30·20/50² = 0.24 (arithmetic).
     assert!((v["nu"].as_f64().unwrap() - 0.24).abs() < REL_ONE_ROUNDING);
-    // b = 1e7 m over GM/c² of 50 M☉ (1476.625038 m per M☉; deflection sheet §3).
+    // b = 1e7 m over GM/c² of 50 M☉ (1476.625038 m per M☉; IAU 2015 nominal, tests/reference/deflection_mpmath.py).
     assert!(rel_diff(v["b_over_gm"].as_f64().unwrap(), 1e7 / (50.0 * 1476.625_038_050)) < 1e-9); // 1476.625038050 m per M☉ transcribed to 13 digits
     assert!(v["physical"]["e_rad_j"].as_f64().unwrap() > 0.0); // radiated energy is positive
     // Strong-field estimate: far from capture it scatters, agrees with the 3PM total to O(1/j⁴)
@@ -413,7 +424,7 @@ fn nr_comparison_on_synthetic_rows() {
     let rows = nr::parse_csv(csv).unwrap();
     assert_eq!(rows.len(), 2);
     let out = nr::compare(&rows).unwrap();
-    // NR-style conversion (sheet §0): γ = 1 + (h² − 1)/(2ν), j = J/(G M² ν).
+    // NR-style conversion (docs/physics/encounter.md §1): γ = 1 + (h² − 1)/(2ν), j = J/(G M² ν).
     assert!(rel_diff(out[0].gamma, 1.0 + (1.02f64 * 1.02 - 1.0) / 0.5) < REL_ROUNDING);
     assert!(rel_diff(out[0].j, 1.15 / 0.25) < REL_ROUNDING);
     // Round trip: h from the converted γ equals E/M.
@@ -433,8 +444,8 @@ fn nr_comparison_on_synthetic_rows() {
 
 #[test]
 fn impulse_on_shell_order_by_order() {
-    // Encounter sheet §2.1: (p_a + Δp_a)² = m_a² order by order in G. Through O(G³) this is
-    // 2 m1 u1·Δp1 = c_b² truncated = Q1² + 2Q1Q2, with Q1, Q2 written out here from the sheet
+    // (p_a + Δp_a)² = m_a² order by order in G (docs/physics/encounter.md §4). Through O(G³) this is
+    // 2 m1 u1·Δp1 = c_b² truncated = Q1² + 2Q1Q2, with Q1, Q2 written out here from the papers
     // (Westpfahl 1985; Kosower, Maybee, O'Connell 2018, arXiv:1811.10950); the radiative part is
     // orthogonal to u1 and has u2·Δp1^rad = −u2·P_rad. Holds to rounding.
     for (m1, m2, g, b) in [(1.0, 3.0, 1.1, 50.0), (0.3, 0.7, 2.5, 400.0), (0.5, 0.5, 20.0, 1e4)] {

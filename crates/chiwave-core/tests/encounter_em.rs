@@ -29,7 +29,7 @@ fn darwin(g: f64, k: f64) -> Option<f64> {
 #[test]
 fn darwin_matches_mpmath_quadrature() {
     // mpmath 1.3, dps 40: raw orbit quadrature of (du/dφ)² = [p² − 2γku − (J² − k²)u²]/J²
-    // (deflection sheet §6), tests/reference/encounter_mpmath.py.
+    // (Landau & Lifshitz, *Classical Theory of Fields*, §39), tests/reference/encounter_mpmath.py.
     for (g, k, want) in [
         (1.5, -0.3, 0.9887771189500706932754),
         (1.5, 0.3, -0.6853945422993483087181),
@@ -44,7 +44,8 @@ fn darwin_matches_mpmath_quadrature() {
 
 #[test]
 fn darwin_branches_and_fall_to_centre() {
-    // Deflection sheet §6: attraction with |κ| ≥ 1 falls to the centre.
+    // Darwin 1913; Landau & Lifshitz, *Classical Theory of Fields*, §39: attraction with |κ| ≥ 1
+    // falls to the centre.
     assert!(darwin(1.5, -1.0).is_none() && darwin(1.5, -3.0).is_none());
     // Repulsion is continuous through κ = 1 (the two closed forms meet).
     let (a, b) = (darwin(2.0, 1.0 - 1e-9).unwrap(), darwin(2.0, 1.0 + 1e-9).unwrap());
@@ -58,7 +59,7 @@ fn darwin_branches_and_fall_to_centre() {
 
 #[test]
 fn darwin_expansion_matches_pl_coefficients() {
-    // Series vs exact (encounter sheet §4.1–§4.2): χ − 2(e₁κ + (π/4)κ² + e₃κ³) = O(κ⁴) for a
+    // Series vs exact (Darwin 1913 expanded; Saketh et al. 2022, arXiv:2109.05994): χ − 2(e₁κ + (π/4)κ² + e₃κ³) = O(κ⁴) for a
     // test charge (h = 1): halving κ divides the remainder by ≈ 16.
     for g in [1.1, 1.5, 3.0] {
         let b = RelativeSpeed::from_gamma(g).unwrap();
@@ -73,7 +74,7 @@ fn darwin_expansion_matches_pl_coefficients() {
 
 #[test]
 fn rutherford_limit() {
-    // Non-relativistic limit (deflection sheet §6): tan(θ/2) = |k|/(m v² b); with J = m γ v b
+    // Non-relativistic limit (Rutherford; Landau & Lifshitz, *Mechanics*, §19): tan(θ/2) = |k|/(m v² b); with J = m γ v b
     // and κ = k/J this is |κ| γ/v. Deviation O(v²): within 8e-5 at v = 0.01 there.
     let mut prev = f64::INFINITY;
     for v in [0.02, 0.01, 0.005] {
@@ -97,24 +98,24 @@ fn rutherford_limit() {
 
 #[test]
 fn em_request_geometric() {
-    // Like charges repel: all χ negative; attraction positive (sheet §4, pitfall 7).
+    // Like charges repel: all χ negative; attraction positive (sign convention: docs/physics/encounter.md §6).
     let r = em_result(r#"{"force": "em", "m1": 1, "m2": 1, "gamma": 1.5, "b": 1000, "q1": 2, "q2": 3}"#);
     assert!(r.kappa > 0.0 && r.chi.pl1 < 0.0 && r.chi.pl3 < 0.0 && r.chi_test_exact.unwrap() < 0.0); // signs: repulsion gives κ > 0 and χ < 0
     assert!(r.impulse.cm.transverse > 0.0); // pushed away from body 2
     let a = em_result(r#"{"force": "em", "m1": 1, "m2": 1, "gamma": 1.5, "b": 1000, "q1": 2, "q2": -3}"#);
     assert!(a.kappa < 0.0 && a.chi.pl1 > 0.0 && a.chi_test_exact.unwrap() > 0.0 && a.impulse.cm.transverse < 0.0); // signs: attraction gives κ < 0, χ > 0, a kick towards body 2
-    // κ = q1 q2/J, J = p b = ν p∞ b/h (sheet §0, §4).
+    // κ = q1 q2/J, J = p b = ν p∞ b/h (docs/physics/encounter.md §1, §6).
     let k = &r.kinematics;
     assert!(rel_diff(r.kappa, 6.0 / (k.nu * k.speed.p_inf * 1000.0 / k.h)) < REL_ROUNDING);
-    // 1PL: χ = −2γκ/p∞ (sheet §4.1).
+    // 1PL: χ = −2γκ/p∞ (Darwin 1913 expanded; Saketh et al. 2022, arXiv:2109.05994).
     assert!(rel_diff(r.chi.pl1, -2.0 * 1.5 * r.kappa / 1.25f64.sqrt()) < REL_ROUNDING);
-    // Radiation reaction always increases χ (sheet §4.2: δχ_rr > 0).
+    // Radiation reaction always increases χ (δχ_rr > 0, docs/physics/encounter.md §6).
     assert!(r.chi.pl3 > r.chi.pl3_conservative && a.chi.pl3 > a.chi.pl3_conservative);
-    // J_rad has the sign of −q1 q2 (sheet §4.2).
+    // J_rad has the sign of −q1 q2 (docs/physics/encounter.md §6).
     assert!(r.j_rad < 0.0 && a.j_rad > 0.0); // sign of −q1 q2
     // Conservative CM energy of body 1 unchanged.
     assert!(r.impulse.cm.energy.abs() < 1e-18); // exactly conserved: rounding of O(G⁰) energies at p ≈ 1e-3 (absolute)
-    // O(e⁴) impulse (sheet §4.1): Δp·b̂ = 2q1q2γ/(p∞b) − π q1²q2²(1/m1 + 1/m2)/(2p∞b²) + O(e⁶),
+    // O(e⁴) impulse (Saketh et al. 2022, arXiv:2109.05994): Δp·b̂ = 2q1q2γ/(p∞b) − π q1²q2²(1/m1 + 1/m2)/(2p∞b²) + O(e⁶),
     // units M = m1 + m2 = 1 (bare charges are in units of √G M, bare b in GM/c²).
     let s = em_result(r#"{"force": "em", "m1": 1, "m2": 1, "gamma": 1.5, "b": 1000, "q1": 0.5, "q2": 0.6}"#);
     let (q1, q2, m, bb, p) = (0.5, 0.6, 0.5, 1000.0, 1.25f64.sqrt());
@@ -142,10 +143,11 @@ fn fall_to_centre_is_a_result() {
 #[test]
 fn radiated_energy_limits() {
     // Test-charge E_rad (γ → 1) equals the two-body dipole formula when body 2 is infinitely
-    // heavy (q2/m2 → 0): π q1⁴q2²(3γ²+1)/(12 m1² v b³) → π q1⁴ q2²/(3 m1² v b³) (sheet §4.4).
+    // heavy (q2/m2 → 0): π q1⁴q2²(3γ²+1)/(12 m1² v b³) → π q1⁴ q2²/(3 m1² v b³) (Jackson 1999,
+    // §14.2, Liénard power on the straight line; §9.2 dipole).
     let r = em_result(r#"{"force": "em", "m1": 1e-12, "m2": 1, "v": 1e-3, "b": 1e8, "q1": 1e-12, "q2": 1e-6}"#);
     assert!(rel_diff(r.e_rad, r.e_rad_dipole) < 1e-5, "{} {}", r.e_rad, r.e_rad_dipole); // O(v²) = 1e-6 and q2/m2 = 1e-6 corrections
-    // Equal q/m: no dipole radiation (sheet §4.4).
+    // Equal q/m: no dipole radiation (Jackson 1999, §9.2).
     let r = em_result(r#"{"force": "em", "m1": 1, "m2": 2, "v": 0.01, "b": 1e6, "q1": 1, "q2": 2}"#);
     assert!(r.e_rad_dipole.abs() < 1e-30 && r.e_rad > 0.0); // exactly zero for equal q/m: rounding of q1/m1 − q2/m2 (absolute)
 }

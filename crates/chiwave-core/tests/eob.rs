@@ -1,10 +1,10 @@
 //! Tests of the strong-field (EOB w-potential) estimate, crate::encounter::eob.
 //!
 //! References used here, each named beside its value:
-//! * published PM angle coefficients, written out below from encounter sheet §1.1–1.5
+//! * published PM angle coefficients, written out below from the papers named beside each
 //!   (test-only helpers; independent of the crate's encounter module);
 //! * mpmath 1.3 values from tests/reference/eob_mpmath.py (mp.dps = 40; polyroots for the turning
-//!   point, tanh-sinh quadrature for the angle, the exact Schwarzschild orbit of sheet §5.2);
+//!   point, tanh-sinh quadrature for the angle, the exact Schwarzschild orbit, Chandrasekhar 1983, ch. 3);
 //! * the Taylor coefficients of the exact isotropic Schwarzschild w(u), computed below by power
 //!   series arithmetic (independent of the χ ↔ w map).
 
@@ -31,32 +31,32 @@ fn p_inf(g: f64) -> f64 {
 fn h_of(g: f64, nu: f64) -> f64 {
     (1.0 + 2.0 * nu * (g - 1.0)).sqrt()
 }
-/// χ_1, Portilla 1980 / Westpfahl 1985 / Damour 2016 arXiv:1609.00354 (encounter sheet §1.1).
+/// χ_1, Portilla 1980 / Westpfahl 1985 / Damour 2016 arXiv:1609.00354.
 fn chi1(g: f64) -> f64 {
     (2.0 * g * g - 1.0) / p_inf(g)
 }
-/// χ_2, Westpfahl 1985; Bini & Damour 2017 arXiv:1706.06877 (encounter sheet §1.2).
+/// χ_2, Westpfahl 1985; Bini & Damour 2017 arXiv:1706.06877.
 fn chi2(g: f64, nu: f64) -> f64 {
     3.0 * PI / 8.0 * (5.0 * g * g - 1.0) / h_of(g, nu)
 }
-/// χ_3^Schw (encounter sheet §1.3).
+/// χ_3^Schw, the ν → 0 limit of Bern et al. 2019 (arXiv:1901.04424); Damour 2018 arXiv:1710.10599.
 fn chi3_schw(g: f64) -> f64 {
     let p = p_inf(g);
     (64.0 * p.powi(6) + 72.0 * p.powi(4) + 12.0 * p * p - 1.0) / (3.0 * p.powi(3))
 }
 /// χ_3^cons, Bern et al. 2019 arXiv:1901.04424 in the form of Antonelli et al. 2019
-/// arXiv:1901.07102 / Damour 2019 arXiv:1912.02139 (encounter sheet §1.3).
+/// arXiv:1901.07102 / Damour 2019 arXiv:1912.02139.
 fn chi3_cons(g: f64, nu: f64) -> f64 {
     let p = p_inf(g);
     let cbar = 2.0 / 3.0 * g * (14.0 * g * g + 25.0)
         + 4.0 * (4.0 * g.powi(4) - 12.0 * g * g - 3.0) / p * ((g - 1.0) / 2.0).sqrt().asinh();
     chi3_schw(g) - 2.0 * nu * p / h_of(g, nu).powi(2) * cbar
 }
-/// I(v) of Damour 2020 arXiv:2010.01641 (encounter sheet §1.4); closed form (v ≥ 0.1 here).
+/// I(v) of Damour 2020 arXiv:2010.01641; closed form (v ≥ 0.1 here).
 fn i_of_v(v: f64) -> f64 {
     -16.0 / 3.0 + 2.0 / (v * v) + 2.0 * (3.0 * v * v - 1.0) / v.powi(3) * v.atanh()
 }
-/// χ_3^rad, Damour 2020 arXiv:2010.01641; Di Vecchia et al. arXiv:2008.12743 (sheet §1.4).
+/// χ_3^rad, Damour 2020 arXiv:2010.01641; Di Vecchia et al. arXiv:2008.12743.
 fn chi3_rad(g: f64, nu: f64) -> f64 {
     let v = p_inf(g) / g;
     nu * (2.0 * g * g - 1.0).powi(2) * i_of_v(v) / h_of(g, nu).powi(2)
@@ -65,7 +65,9 @@ fn chi3_rad(g: f64, nu: f64) -> f64 {
 fn chi_total(g: f64, nu: f64) -> Vec<f64> {
     vec![chi1(g), chi2(g, nu), chi3_cons(g, nu) + chi3_rad(g, nu)]
 }
-/// Test-body χ_4^Schw, χ_5^Schw, χ_6^Schw (encounter sheet §1.5, verified by quadrature there).
+/// Test-body χ_4^Schw, χ_5^Schw, χ_6^Schw (χ_4: Damour 2020, arXiv:1912.02139;
+/// χ_5, χ_6: a high-precision fit of the exact quadrature with integer-relation identification,
+/// recalled from memory).
 fn chi4_schw(g: f64) -> f64 {
     105.0 * PI / 128.0 * (33.0 * g.powi(4) - 18.0 * g * g + 1.0)
 }
@@ -132,14 +134,14 @@ fn w_schw_taylor(g: f64) -> [f64; N] {
 
 #[test]
 fn map_reproduces_isotropic_schwarzschild_taylor_coefficients() {
-    // w_n from the published χ_1..χ_6^Schw (sheet §1.1–1.5) must equal the Taylor coefficients of
+    // w_n from the closed forms χ_1..χ_6^Schw above must equal the Taylor coefficients of
     // the exact isotropic w (series arithmetic above): checks the map through 6th order.
     for g in [1.01, 1.1, 1.5, 2.0, 3.0, 10.0] {
         let p = p_inf(g);
         let w = w_from_chi(p, &chi_schw(g, 6));
         let t = w_schw_taylor(g);
         for n in 1..=6 {
-            // tolerance: χ_n of the sheet carry p^-n cancellations at γ = 1.01 (pitfall 6)
+            // tolerance: the closed forms χ_n carry p^-n cancellations at γ = 1.01
             let tol = if g < 1.05 { 1e-7 } else { 1e-11 }; // γ = 1.01: χ_n carry p∞^-n cancellations (p∞ ≈ 0.14)
             assert!(rel_diff(w[n - 1], t[n]) < tol, "γ={g} n={n}: {} vs {}", w[n - 1], t[n]);
         }
@@ -250,7 +252,7 @@ fn critical_j_matches_mpmath() {
 // (b) Test-body limit against the exact Schwarzschild geodesic
 // ---------------------------------------------------------------------------------------------
 
-/// Exact test-body angle in Schwarzschild coordinates (encounter sheet §5.2), written here
+/// Exact test-body angle in Schwarzschild coordinates (Chandrasekhar 1983, ch. 3), written here
 /// independently: u = GM/r_s, f(u) = γ² − (1 − 2u)(1 + j²u²) = 2j²(u0−u)(u1−u)(u−u2)... we only
 /// need u0 (smallest positive root, bisection) and the substitution u = u0(1 − s²).
 fn schw_exact(g: f64, j: f64) -> f64 {
@@ -315,7 +317,7 @@ fn test_body_estimate_beats_truncated_pm_series_near_capture() {
         let err_eob = (x - exact).abs();
         let err_pm = (pm - exact).abs();
         assert!(err_eob < 0.5 * err_pm, "γ={g} j={j}: EOB err {err_eob}, PM err {err_pm}"); // the resummed estimate at least halves the truncation error near capture
-        // more coefficients (χ_5, χ_6 of the sheet §1.5) bring the estimate closer still
+        // more coefficients (χ_5, χ_6 of the closed forms above) bring the estimate closer still
         let (x6, _) = scattered(estimate(g, NU0, j, &chi_schw(g, 6)).unwrap());
         assert!((x6 - exact).abs() < err_eob, "γ={g} j={j}");
     }
@@ -452,7 +454,7 @@ fn total_chi3_gives_positive_w3_and_conservative_does_not_at_high_energy() {
         }
     }
     // conservative only, γ = 10, ν = 1/4: w_3 < 0 (cf. mpmath exploration; χ_3^cons ~ −8γ³ ln 2γ,
-    // sheet pitfall 5). The model still predicts capture at small j (module docs, rule 3) and
+    // Damour 2020, arXiv:2010.01641). The model still predicts capture at small j (module docs, rule 3) and
     // scatters at large j.
     let (g, nu) = (10.0, 0.25);
     let cons = vec![chi1(g), chi2(g, nu), chi3_cons(g, nu)];

@@ -21,22 +21,22 @@ fn example(offset: f64) -> LensRequest {
 }
 
 #[test]
-fn worked_example_deflection_sheet() {
+fn worked_example_point_lens() {
     let r = example(0.5).evaluate().unwrap();
-    // Deflection sheet §4 worked example (M = 0.3 GM☉^N/G, D_L = 4 kpc, D_S = 8 kpc):
+    // Worked example (M = 0.3 GM☉^N/G, D_L = 4 kpc, D_S = 8 kpc; mpmath 1.3, tests/reference/lensing_mpmath.py):
     // θ_E = 2.67920207569003e-9 rad = 0.552625097039022 mas, R_E = 2.21050038815609 au.
     assert!(rel_diff(r.einstein_radius_rad, 2.67920207569003e-9) < REL_TRANSCRIBED);
     assert!(rel_diff(r.einstein_radius_mas, 0.552625097039022) < REL_TRANSCRIBED);
     assert!(rel_diff(r.einstein_radius_au, 2.21050038815609) < REL_TRANSCRIBED);
-    // Same sheet, u = 0.5: μ+ = 1.5914103126635, μ− = −0.591410312663498, μ_tot = 2.182820625327.
+    // Paczyński 1986 at u = 0.5 (same script): μ+ = 1.5914103126635, μ− = −0.591410312663498, μ_tot = 2.182820625327.
     assert!(rel_diff(r.images[0].magnification, 1.5914103126635) < REL_TRANSCRIBED);
     assert!(rel_diff(r.images[1].magnification, -0.591410312663498) < REL_TRANSCRIBED);
     assert!(rel_diff(r.total_magnification, 2.182820625327) < REL_TRANSCRIBED);
-    // x± = (0.5 ± √4.25)/2 (elementary, sheet §4 formula by hand).
+    // x± = (0.5 ± √4.25)/2 (elementary, Paczyński 1986 formula by hand).
     assert!(rel_diff(r.images[0].position, (0.5 + 4.25f64.sqrt()) / 2.0) < REL_ROUNDING);
     assert!(rel_diff(r.images[1].position, (0.5 - 4.25f64.sqrt()) / 2.0) < REL_ROUNDING);
-    // Time delay 4GM/c³ ΔT(0.5): ΔT = 0.5√4.25/2 + ln((√4.25 + 0.5)/(√4.25 − 0.5)) (sheet §4
-    // formula written out by hand with the log, not the asinh form the code uses).
+    // Time delay 4GM/c³ ΔT(0.5): ΔT = 0.5√4.25/2 + ln((√4.25 + 0.5)/(√4.25 − 0.5)) (Takahashi & Nakamura
+    // 2003 formula written out by hand with the log, not the asinh form the code uses).
     let s = 4.25f64.sqrt();
     let dt = 0.25 * s + ((s + 0.5) / (s - 0.5)).ln();
     let c = chiwave_core::units::codata2018::C;
@@ -48,7 +48,7 @@ fn worked_example_deflection_sheet() {
 
 #[test]
 fn identities_over_a_grid() {
-    // μ+ + μ− = 1 and μ_tot = (u² + 2)/(u√(u² + 4)) = μ+ − μ− (deflection sheet §4); the images
+    // μ+ + μ− = 1 and μ_tot = (u² + 2)/(u√(u² + 4)) = μ+ − μ− (Paczyński 1986); the images
     // solve the lens equation u = x − 1/x (Schneider, Ehlers & Falco 1992), and x+ x− = −1.
     for k in 0..=60 {
         let u = 10f64.powf(-4.0 + 8.0 * k as f64 / 60.0);
@@ -70,7 +70,7 @@ fn identities_over_a_grid() {
         if u < 100.0 {
             assert!(rel_diff(mm, 1.0 / (1.0 - xm.powi(-4))) < tol, "u={u}");
         }
-        // ΔT = T(x−) − T(x+) with T(x) = (x − u)²/2 − ln|x| (sheet §4 Fermat potential).
+        // ΔT = T(x−) − T(x+) with T(x) = (x − u)²/2 − ln|x| (Fermat potential, Schneider, Ehlers & Falco 1992).
         if u > 1e-3 && u < 100.0 {
             let t = |x: f64| 0.5 * (x - u).powi(2) - x.abs().ln();
             assert!(rel_diff(l.time_delay(), t(xm) - t(xp)) < 1e-11, "u={u}"); // the Fermat-potential difference cancels ~3 digits at u = 1e-3
@@ -93,7 +93,7 @@ fn redshift_scales_delay_and_w_not_theta() {
     assert!(rel_diff(b.time_delay_s, 2.0 * a.time_delay_s) < REL_ROUNDING);
     assert!(rel_diff(b.w.unwrap(), 2.0 * a.w.unwrap()) < REL_ROUNDING);
     assert!(b.flags.iter().any(|f| f.key == "distances" && f.level == Level::Caution));
-    // w = 8πGM f/c³: for 1 M☉ at 100 Hz, w = 0.0124 (deflection sheet §4); here 0.3 M☉.
+    // w = 8πGM f/c³: for 1 M☉ at 100 Hz, w = 0.0124 (mpmath 1.3, tests/reference/lensing_mpmath.py); here 0.3 M☉.
     assert!((a.w.unwrap() / 0.3 - 0.0124).abs() < 5e-5); // 0.0124 quoted to 3 digits
     // w < 1: diffraction dominates, the ray magnification is flagged invalid and |F| ≈ 1.
     assert!(a.flags.iter().any(|f| f.key == "geometric_optics" && f.level == Level::Invalid));

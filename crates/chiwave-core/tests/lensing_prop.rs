@@ -68,7 +68,7 @@ proptest! {
 
     #[test]
     fn amplification_tends_to_one_as_w_to_zero(lw in -12.0..-3.0f64, y in 0.0..10.0f64) {
-        // F → 1 as w → 0 (deflection sheet §4); observed |F − 1| ≈ (w/2)|ln w|, bound w(1 + |ln w|).
+        // F → 1 as w → 0 (Takahashi & Nakamura 2003, astro-ph/0305055); observed |F − 1| ≈ (w/2)|ln w|, bound w(1 + |ln w|).
         let w = 10f64.powf(lw);
         let (f, _) = amplification_factor(w, y).unwrap();
         prop_assert!((f - 1.0).norm() <= w * (1.0 + w.ln().abs()), "w={w} y={y}: {f}");

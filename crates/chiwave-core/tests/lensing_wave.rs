@@ -1,7 +1,7 @@
 //! Wave-optics tests for the point-lens amplification factor F(w, y).
 //!
 //! References: mpmath 1.3 (its own hyp1f1 and gamma, a different algorithm from ours), the
-//! closed forms of the deflection sheet §4, and a direct quadrature of the diffraction integral.
+//! closed-form limits of Takahashi & Nakamura 2003 (astro-ph/0305055), and a direct quadrature of the diffraction integral.
 // The mpmath values are pasted exactly as the script prints them (17 significant digits).
 #![allow(clippy::excessive_precision)]
 
@@ -24,7 +24,7 @@ fn crel(a: Complex64, b: Complex64) -> f64 {
 
 #[test]
 fn check_value_f_1_03() {
-    // Deflection sheet §4 check value: F(1, 0.3) = 1.67924419493817 − 0.564230508370834 i.
+    // mpmath 1.3 (tests/reference/lensing_mpmath.py): F(1, 0.3) = 1.67924419493817 − 0.564230508370834 i.
     let (f, m) = amplification_factor(1.0, 0.3).unwrap();
     assert_eq!(m, Method::Series);
     assert!(crel(f, Complex64::new(1.67924419493817, -0.564230508370834)) < REL_TRANSCRIBED, "{f}");
@@ -64,7 +64,7 @@ fn asymptotic_expansion_agrees_with_continuation() {
 
 #[test]
 fn against_diffraction_integral() {
-    // Independent method (deflection sheet §4, check 1): the radial diffraction integral rotated
+    // Independent method (docs/physics/lensing.md §2): the radial diffraction integral rotated
     // to x = e^{iπ/4} s,
     //   F = w e^{iw(y²/2 − φ_m)} e^{πw/4} ∫_0^∞ s^{1−iw} J0(e^{iπ/4} w y s) e^{−ws²/2} ds,
     // evaluated here by Gauss–Legendre panels in v = ln s, with J0 of complex argument by its
@@ -111,7 +111,7 @@ fn against_diffraction_integral() {
 
 #[test]
 fn modulus_at_y0_closed_form() {
-    // Deflection sheet §4, check 2: at y = 0, |F|² = πw/(1 − e^{−πw}) (from |Γ(1 + ix)|² =
+    // Takahashi & Nakamura 2003, y = 0 limit: at y = 0, |F|² = πw/(1 − e^{−πw}) (from |Γ(1 + ix)|² =
     // πx/sinh(πx), A&S 6.1.31); the code instead uses the Stirling series for ln Γ.
     for w in [1e-6, 1e-3, 0.01, 0.1, 0.5, 1.0, 2.0, 5.0, 20.0, 100.0, 500.0, 1000.0, 1e4, 1e5] {
         let (f, _) = amplification_factor(w, 0.0).unwrap();
@@ -125,7 +125,7 @@ fn modulus_at_y0_closed_form() {
 
 #[test]
 fn large_w_approaches_geometric_optics_like_one_over_w() {
-    // Deflection sheet §4, check 3: F → √|μ+| − i√|μ−| e^{iwΔT}, the difference falling like 1/w.
+    // Geometric-optics limit (Takahashi & Nakamura 2003): F → √|μ+| − i√|μ−| e^{iwΔT}, the difference falling like 1/w.
     for y in [0.3, 1.0, 3.0] {
         let diff = |w: f64| {
             let (f, _) = amplification_factor(w, y).unwrap();
@@ -145,7 +145,7 @@ fn large_w_approaches_geometric_optics_like_one_over_w() {
 
 #[test]
 fn small_w_tends_to_one() {
-    // F → 1 as w → 0 (no lensing of waves much longer than the Schwarzschild radius; sheet §4).
+    // F → 1 as w → 0 (no lensing of waves much longer than the Schwarzschild radius; Takahashi & Nakamura 2003).
     // Observed |F − 1| ≈ (w/2)|ln w|; bound w(1 + |ln w|) (common practice, no source).
     for y in [0.0, 0.3, 1.0, 10.0] {
         for w in [1e-10, 1e-8, 1e-6, 1e-4, 1e-2] {
@@ -205,7 +205,7 @@ fn ln_gamma_against_mpmath_and_identities() {
 #[test]
 fn conjugate_convention_is_detected() {
     // The e^{+iωt} convention would give the conjugate: F(1, 0.3) has Im F < 0 in ours
-    // (deflection sheet §4 check value), and the geometric limit at large w has the saddle's −i.
+    // (tests/reference/lensing_mpmath.py value), and the geometric limit at large w has the saddle's −i.
     let (f, _) = amplification_factor(1.0, 0.3).unwrap();
     assert!(f.im < -0.5); // the sign of Im F fixes the e^{−iωt} convention
     let g = amplification_geometric(0.0, 1.0).unwrap();

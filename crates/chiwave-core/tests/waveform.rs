@@ -1,7 +1,7 @@
 //! Waveform checks against sources outside the waveform code paths: the Herrmann et al. 2021
 //! radiated energy-momentum, the Braginsky–Thorne memory, Lorentz covariance (frame of body 1
 //! computed directly vs boosted from frame A), the Newtonian quadrupole formula, the ZFL closed
-//! form, Parseval's theorem and the waveform sheet's §6 worked example.
+//! form, Parseval's theorem and a worked example in physical units evaluated by hand.
 
 mod common;
 
@@ -15,7 +15,7 @@ fn sky(n_polar: usize, n_azimuth: usize, n_u: usize, n_x: usize) -> SkyOptions {
 
 /// Energy balance: the flux integral of the LO waveform over u and the sphere equals
 /// P_rad^μ = (m1² m2²/b³)(u1 + u2)^μ E(γ)/(γ + 1) of Herrmann, Parra-Martinez, Ruf & Zeng 2021
-/// (arXiv:2101.07255; waveform sheet §4, which reports 1e-14 at γ = 1.1, 1.5, 2). Grids chosen to
+/// (arXiv:2101.07255; docs/physics/waveform.md §4 reports 1e-14 at γ = 1.1, 1.5, 2). Grids chosen to
 /// reach the tolerance; the independent closed form is checked against mpmath in energy.rs.
 #[test]
 fn energy_balance_against_herrmann_et_al() {
@@ -37,7 +37,7 @@ fn energy_balance_against_herrmann_et_al() {
         assert!((p.momentum[0] - closed.momentum[0]).abs() < tol * closed.energy, "γ={g} {frame:?} Px");
         assert!(p.momentum[1].abs() < tol * closed.energy && p.momentum[2].abs() < tol * closed.energy, "γ={g} {frame:?} {:?} {}", p.momentum, closed.energy);
         if frame == Frame::Rest2 {
-            // Frame A: P^x = P^0 (γ − 1)/(γ v) (sheet §4).
+            // Frame A: P^x = P^0 (γ − 1)/(γ v) (P ∝ u1 + u2, Herrmann et al. 2021).
             let ratio = (g - 1.0) / (g * s.v());
             assert!((p.momentum[0] / p.energy - ratio).abs() < tol, "γ={g}");
         }
@@ -65,7 +65,7 @@ fn sky_integrator_is_progressive() {
 }
 
 /// Memory: the waveform's late-minus-early value equals Braginsky & Thorne 1987 with the LO impulse
-/// (sheet §3), in frame A and in the CM frame (the latter tests δ and ψ of the frame map); and the
+/// (Braginsky & Thorne 1987, Nature 327, 123), in frame A and in the CM frame (the latter tests δ and ψ of the frame map); and the
 /// strain itself reaches it at |u| → ∞ (the field-stress part must vanish there).
 #[test]
 fn memory_matches_braginsky_thorne() {
@@ -93,7 +93,7 @@ fn memory_matches_braginsky_thorne() {
     }
 }
 
-/// Lorentz covariance (sheet §7.2): the waveform computed directly in the rest frame of body 1
+/// Lorentz covariance (docs/physics/waveform.md §4): the waveform computed directly in the rest frame of body 1
 /// (the same code with the bodies' roles swapped, rotated by π about z) equals the frame-A
 /// waveform boosted into that frame. ḣ is compared (the constant O(G) piece is not covariant).
 #[test]
@@ -121,7 +121,8 @@ fn lorentz_covariance_body1_frame() {
     }
 }
 
-/// Straight-line O(G) quadrupole waveform (sheet §5), written out here independently:
+/// Straight-line O(G) quadrupole waveform (Einstein 1918 quadrupole formula on the O(G)-deflected
+/// straight line; docs/physics/waveform.md §6), written out here independently:
 /// D h_ij = 4μ(v0_i dv_j + dv_i v0_j − M x0_i x0_j/r³), dv = (M/(v r), −(M/(b v))(1 + v t/r), 0).
 fn quadrupole_straight(m1: f64, m2: f64, v: f64, b: f64, th: f64, ph: f64, t: f64) -> [f64; 2] {
     let m = m1 + m2;
@@ -140,7 +141,7 @@ fn quadrupole_straight(m1: f64, m2: f64, v: f64, b: f64, th: f64, ph: f64, t: f6
 }
 
 /// Slow motion: in the CM frame with equal masses the LO PM waveform approaches the quadrupole
-/// formula with a relative deviation O(v²) (sheet §5/§7.4): halving v divides it by ≈ 4.
+/// formula with a relative deviation O(v²) (docs/physics/waveform.md §6): halving v divides it by ≈ 4.
 #[test]
 fn quadrupole_limit_is_second_order_in_v() {
     let dev = |v: f64| {
@@ -167,7 +168,7 @@ fn quadrupole_limit_is_second_order_in_v() {
 }
 
 /// The exact-hyperbola quadrupole waveform tends to the O(G) straight-line one as e → ∞
-/// (sheet §5: deviation ≈ 2.2/e).
+/// (docs/physics/waveform.md §6: deviation ≈ 2.2/e).
 #[test]
 fn hyperbola_tends_to_straight_line() {
     let v: f64 = 0.01;
@@ -191,8 +192,8 @@ fn hyperbola_tends_to_straight_line() {
 }
 
 /// Zero-frequency limit: the sky integral of |Δh|²/(16π²) from the Braginsky–Thorne memory (Smarr
-/// 1977) equals the closed form (2GQ²/π)[…] (Di Vecchia et al. 2021, prefactor fixed by the sheet
-/// §3 check), in frame A and in the CM frame (it is Lorentz invariant).
+/// 1977) equals the closed form (2GQ²/π)[…] (Di Vecchia et al. 2021, arXiv:2101.05772, as recalled;
+/// prefactor fixed by this check, docs/physics/waveform.md §3), in frame A and in the CM frame (it is Lorentz invariant).
 #[test]
 fn zfl_closed_form_and_frame_invariance() {
     for (g, opts) in [(1.3, sky(24, 24, 8, 8)), (2.0, sky(32, 32, 8, 8))] {
@@ -270,8 +271,9 @@ fn request(json: &str) -> Result<GravityWaveformResult, chiwave_core::InputError
     })
 }
 
-/// Waveform sheet §6 worked example: m1 = m2 = 10 M☉, v = 1000 km/s, b = 1 au, D = 1 Mpc gives a
-/// strain unit 4.72e-26, b/c = 499 s and f ~ 1.06e-6 Hz (values quoted to 3 digits).
+/// Worked example evaluated by hand (CODATA 2018 G, IAU 2015 GM☉, IAU 2012 au): m1 = m2 = 10 M☉,
+/// v = 1000 km/s, b = 1 au, D = 1 Mpc gives a strain unit G²m1m2/(c⁴Db) = 4.72e-26, b/c = 499 s
+/// and f ~ v/(2πb) = 1.06e-6 Hz (values quoted to 3 digits).
 #[test]
 fn worked_example_physical_units() {
     let r = request(
@@ -281,18 +283,18 @@ fn worked_example_physical_units() {
     .unwrap();
     let p = r.physical.as_ref().unwrap();
     let su = p.scales.strain_unit.unwrap();
-    assert!((su / 4.72e-26 - 1.0).abs() < 1.1e-3, "strain unit {su}"); // sheet §6, 3 digits
-    assert!((p.scales.b_over_c_s / 499.0 - 1.0).abs() < 1e-3, "b/c {}", p.scales.b_over_c_s); // sheet §6
-    assert!((p.scales.f_char_hz / 1.06e-6 - 1.0).abs() < 5e-3, "f {}", p.scales.f_char_hz); // sheet §6
-    // Strain at D = (D h/M) × (GM/c²)/D, and the peak is a few strain units (sheet §6: ≈ 8.7 max
-    // over u and sky of |h − h(−∞)| for v ≪ c; here one direction).
+    assert!((su / 4.72e-26 - 1.0).abs() < 1.1e-3, "strain unit {su}"); // by hand, 3 digits
+    assert!((p.scales.b_over_c_s / 499.0 - 1.0).abs() < 1e-3, "b/c {}", p.scales.b_over_c_s); // by hand, 3 digits
+    assert!((p.scales.f_char_hz / 1.06e-6 - 1.0).abs() < 5e-3, "f {}", p.scales.f_char_hz); // by hand, 3 digits
+    // Strain at D = (D h/M) × (GM/c²)/D, and the peak is a few strain units (≈ 8.7 max over u
+    // and sky of |h − h(−∞)| for v ≪ c, recalled from memory; here one direction).
     let peak = p.peak_strain.unwrap();
     assert!(peak > 0.1 * su && peak < 8.8 * su, "peak {peak} vs unit {su}"); // ≈ 8.7 units is the maximum over u and the sky for v ≪ c; one direction lies below
     // E_rad: closed form in J equals (E/M) M c² with M = 20 M☉ (consistency of units).
     let msun_j = chiwave_core::units::M_SUN_KG * 299_792_458f64.powi(2);
     assert!(rel_diff(p.e_rad_j, r.e_rad_closed * 20.0 * msun_j) < 1e-12); // a unit conversion: rounding only
     assert!(rel_diff(p.e_rad_msun_c2, r.e_rad_closed * 20.0) < 1e-12); // a unit conversion: rounding only
-    // Newtonian straight line (sheet §4): E = 37π G³ m1² m2² v/(15 b³ c⁵) — v = 1000 km/s.
+    // Newtonian straight line (slow limit of Herrmann et al. 2021): E = 37π G³ m1² m2² v/(15 b³ c⁵) — v = 1000 km/s.
     let v = 1e6 / 299_792_458.0;
     let b_over_m = r.b_over_gm;
     let newton = 37.0 * std::f64::consts::PI * 0.0625 * v / (15.0 * b_over_m.powi(3));
@@ -416,7 +418,7 @@ mod no_panic {
 /// The CLI contract example (issue): b = 1 with m1 = m2 = 1, i.e. b = 1 GM/c² (M = m1 + m2, bare b read
 /// as for the encounter request), must evaluate, and
 /// carry the b validity flag at level invalid; the strain obeys the LO homogeneity D·h(u; b) =
-/// (b'/b) D·h(u b'/b; b') (the O(G²) strain is ∝ m1 m2/b at fixed u/b: sheet §6 scaling, an
+/// (b'/b) D·h(u b'/b; b') (the O(G²) strain is ∝ m1 m2/b at fixed u/b: dimensional analysis, an
 /// independent property of the formula, checked here across two orders of magnitude in b).
 #[test]
 fn small_b_contract_example_works_and_is_flagged() {
@@ -477,21 +479,22 @@ fn em_request_contract() {
     assert!(rel_diff(r.e_rad_closed, r.e_rad_body1 + r.e_rad_body2) < REL_ONE_ROUNDING);
     assert!(r.e_rad_flux_rel_error.unwrap() < 1e-9); // the sphere rule is sized for 1e-10 on the interference (em::energies)
     // Units: bare masses 1, 1 → m/M = 1/2; bare b = 20 is b/M = 20; charges bare in √G M.
-    // Liénard closed form π q1⁴ q2² (1 + 3γ²)/(12 m1² v b³) (sheet §2), evaluated here by hand.
+    // Liénard closed form π q1⁴ q2² (1 + 3γ²)/(12 m1² v b³) (Jackson 1999, §14.2, on the straight
+    // line), evaluated here by hand.
     let v = 3f64.sqrt() / 2.0;
     let e1 = std::f64::consts::PI * 1e-4 * 0.04 * 13.0 / (12.0 * 0.25 * v * 8000.0);
     assert!(rel_diff(r.e_rad_body1, e1) < REL_FEW_OPS, "{} vs {e1}", r.e_rad_body1);
-    // Larmor closed form π q1² q2⁴ (1 + 3γ²)/(12 γ m2² v b³) (sheet §2).
+    // Larmor closed form π q1² q2⁴ (1 + 3γ²)/(12 γ m2² v b³) (Jackson 1999, §14.2).
     let e2 = std::f64::consts::PI * 0.01 * 0.0016 * 13.0 / (12.0 * 2.0 * 0.25 * v * 8000.0);
     assert!(rel_diff(r.e_rad_body2, e2) < REL_FEW_OPS, "{} vs {e2}", r.e_rad_body2);
-    // Soft-photon limit of the spectrum from the memory (sheet §3).
+    // Soft-photon limit of the spectrum from the memory (docs/physics/waveform.md §5).
     let sp = r.spectrum.as_ref().unwrap();
     assert_eq!(sp.omega.len(), 3);
     assert!(rel_diff(sp.zfl_direction, (r.memory.theta.powi(2) + r.memory.phi.powi(2)) / (4.0 * std::f64::consts::PI.powi(2))) < REL_ONE_ROUNDING);
     assert!(sp.de_domega_dsolid.iter().all(|x| x.is_finite() && *x >= 0.0)); // a spectrum is not negative
 }
 
-/// Face-on field by hand (sheet §2): θ = 0, u = 0, m1 = m2 = q1 = q2 = b = 1 bare, so m/M = 1/2 and
+/// Face-on field by hand (Liénard–Wiechert field, Jackson 1999, §14.1): θ = 0, u = 0, m1 = m2 = q1 = q2 = b = 1 bare, so m/M = 1/2 and
 /// b/M = 1: a1_y = (q1 q2/m1)/(γ b²) = 1, a2_y = −(q1 q2/m2) γ/b² = −4 at γ = 2, and
 /// D E_φ = −(q1 a1_y + q2 a2_y) = 3, D E_θ = 0.
 #[test]
@@ -508,7 +511,7 @@ fn em_face_on_field_in_units_of_m() {
 /// an independent implementation of the Liénard result) equals e_rad_body1, for geometric and
 /// physical inputs; and at low velocity the total (with interference) approaches the
 /// non-relativistic dipole formula of the encounter module, π q1² q2² (q1/m1 − q2/m2)²/(3 v b³)
-/// (encounter sheet §4.4), with relative corrections O(v²).
+/// (Jackson 1999, §9.2), with relative corrections O(v²).
 #[test]
 fn em_request_agrees_with_encounter_module() {
     use chiwave_core::encounter::{EncounterRequest, EncounterResult};
@@ -569,8 +572,8 @@ fn em_request_validation() {
 
 /// The sky rule of the angle-integrated spectrum (SPECTRUM_SKY, used by the page and the
 /// figures): at ω → 0 it reproduces the ZFL closed form (Di Vecchia et al. 2021,
-/// arXiv:2101.05772, prefactor 2GQ²/π, sheet §3), and ∫dE/dω dω reproduces E_rad of Herrmann et
-/// al. 2021 (arXiv:2101.07255, sheet §4), in both frames.
+/// arXiv:2101.05772, prefactor 2GQ²/π, docs/physics/waveform.md §3), and ∫dE/dω dω reproduces E_rad of Herrmann et
+/// al. 2021 (arXiv:2101.07255), in both frames.
 #[test]
 fn spectrum_sky_rule_against_zfl_and_total_energy() {
     for g in [1.2, 1.8] {

@@ -101,7 +101,7 @@ pub struct StrainData<'a> {
 }
 
 /// h₊ and h× against time, the memory levels (dotted) and a legend note with the constant O(G)
-/// piece, which is kept out of the curves (it is not Lorentz-covariant; waveform sheet §0).
+/// piece, which is kept out of the curves (it is not Lorentz-covariant; docs/physics/waveform.md §1).
 pub fn strain(d: &StrainData) -> Figure {
     let mut fig = Figure::new(format!("Strain, {}", d.frame), Axis::linear(d.t_label), Axis::linear(d.h_label));
     let (x0, x1) = extent(d.t);
@@ -469,7 +469,7 @@ mod tests {
         assert!(labels(&f)[2].starts_with("memory ∫du D·E"));
         assert_eq!(scene::figure(&waveform_request(), "em_field", &scene::Options::default()).unwrap_err().field(), "force");
         // The closed-form Bessel spectrum: its low-frequency end approaches the soft-photon limit
-        // |DΔA⊥|²/(4π²) from the memory (classical zero-frequency limit, waveform sheet §3).
+        // |DΔA⊥|²/(4π²) from the memory (classical zero-frequency limit, docs/physics/waveform.md §5).
         let f = scene::figure(&req, "em_spectrum", &scene::Options::default()).unwrap();
         assert!(f.x.log && f.y.log && labels(&f).contains(&"dE/dω, over the sphere"));
         let first = f.series[0].points[0].unwrap().1;

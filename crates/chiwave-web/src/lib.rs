@@ -173,3 +173,11 @@ pub fn info() -> Result<JsValue, js_sys::Error> {
             .collect(),
     })
 }
+
+/// Every reference the tool uses (`chiwave_core::references::listing`): each entry's fields,
+/// its short citation (the exact text the results' `sources` strings contain) and its BibTeX.
+/// The page's References panel and the source tooltips read it; nothing is fetched.
+#[wasm_bindgen]
+pub fn references() -> Result<JsValue, js_sys::Error> {
+    to_js(&chiwave_core::references::listing())
+}

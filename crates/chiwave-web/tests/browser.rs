@@ -3,7 +3,7 @@
 //! field-named JS errors out. The physics is tested natively in chiwave-core.
 #![cfg(target_arch = "wasm32")]
 
-use chiwave_web::{check_scenario, evaluate, figure, figure_names, info, render_figure};
+use chiwave_web::{check_scenario, evaluate, figure, figure_names, info, references, render_figure};
 use js_sys::{Array, Object, Reflect, JSON};
 use wasm_bindgen::{JsCast, JsValue};
 use wasm_bindgen_test::*;
@@ -129,4 +129,28 @@ fn generic_figure_and_scenario_and_info() {
     assert_eq!(get(&deg, "rad_per_unit").as_f64(), Some(std::f64::consts::PI / 180.0));
     assert_eq!(get(&units.get(4), "label").as_string().as_deref(), Some("µas"));
     let _: Object = i.dyn_into().expect("info is an object");
+}
+
+/// `references()` returns the registry with each entry's short citation and BibTeX, and every
+/// citation of a result names an id in it; each short citation appears in the source text.
+#[wasm_bindgen_test]
+fn references_list_the_registry_with_bibtex() {
+    let list: Array = references().expect("registry").into();
+    assert!(list.length() > 50);
+    let mut ids = Vec::new();
+    for e in list.iter() {
+        let id = get(&e, "id").as_string().expect("id");
+        let bib = get(&e, "bibtex").as_string().expect("bibtex");
+        assert!(bib.contains(&format!("{{{id},")), "{id}: {bib}");
+        assert!(get(&e, "short").is_string());
+        ids.push(id);
+    }
+    let r = evaluate(js(r#"{"kind":"light","b":10}"#)).expect("valid");
+    let cites = get(&get(&r, "citations"), "alpha");
+    let first = Array::from(&cites).get(0);
+    let id = get(&first, "id").as_string().expect("id");
+    assert!(ids.contains(&id), "{id}");
+    let text = get(&get(&r, "sources"), "alpha").as_string().expect("text");
+    let short = list.iter().find(|e| get(e, "id").as_string().as_deref() == Some(id.as_str())).map(|e| get(&e, "short").as_string().unwrap());
+    assert!(text.contains(&short.unwrap()), "{text}");
 }

@@ -1,6 +1,6 @@
 //! Kerr black hole, equatorial light rays: photon orbits, closest approach, exact deflection.
 //!
-//! Conventions (deflection sheet §0, §2): G = c = 1, lengths in units of M; the spin is signed,
+//! Conventions (docs/physics/deflection.md §1): G = c = 1, lengths in units of M; the spin is signed,
 //! a_s = a·sign(L_z), with a_s > 0 **prograde** (ray's orbital angular momentum parallel to the
 //! spin); |a_s| ≤ M (the extremal value is allowed). E = 1, L = b. Boyer–Lindquist radius.
 //! A = a_s/b, ε = M/b.
@@ -13,8 +13,8 @@ use std::f64::consts::PI;
 /// Prograde (+) / retrograde (−) circular photon orbit radius in the equatorial plane.
 ///
 /// # Formula
-/// r_ph = 2M{1 + cos[(2/3) arccos(−a_s/M)]} (Bardeen, Press & Teukolsky 1972, ApJ 178, 347;
-/// deflection sheet §2, **VERIFIED** by bracketing).
+/// r_ph = 2M{1 + cos[(2/3) arccos(−a_s/M)]} (Bardeen, Press & Teukolsky 1972, ApJ 178, 347,
+/// equatorial circular photon orbits; the bracketing test in tests/deflection.rs checks it).
 ///
 /// # Domain
 /// |a_s| ≤ 1 (not checked here; see [`critical_b`]). a_s = 0 gives 3M, a_s = ±M gives M and 4M.
@@ -25,13 +25,13 @@ pub fn photon_orbit_radius(a: f64) -> f64 {
 /// Critical impact parameter for capture of equatorial rays (units of M).
 ///
 /// # Formula
-/// b_c = 3√(M r_ph) − a_s (Bardeen, Press & Teukolsky 1972; deflection sheet §2), which is
+/// b_c = 3√(M r_ph) − a_s (Bardeen, Press & Teukolsky 1972, ApJ 178, 347), which is
 /// 2M (a_s = +M), 3√3 M (a_s = 0) and 7M (a_s = −M).
 ///
 /// # Examples
 /// ```
 /// use chiwave_core::deflection::kerr::critical_b;
-/// // Deflection sheet §2: b_c = 2M and 7M at a_s = ±M.
+/// // Bardeen, Press & Teukolsky 1972: b_c = 2M and 7M at a_s = ±M (extremal Kerr).
 /// assert!((critical_b(1.0) - 2.0).abs() < 1e-12);
 /// assert!((critical_b(-1.0) - 7.0).abs() < 1e-12);
 /// ```
@@ -45,7 +45,7 @@ pub fn horizon_radius(a: f64) -> f64 {
 }
 
 /// Turning point σ = b/r0 from the depressed cubic x³ − (1 − A²)x + 2ε(1 − A)² = 0 for
-/// x = r0/b (R(r0) = 0 of the sheet §2 divided by r0 b³), largest root by the trigonometric
+/// x = r0/b (R(r0) = 0 of [`deflection`] divided by r0 b³), largest root by the trigonometric
 /// form, polished by Newton steps.
 fn turning_point(b: f64, a: f64) -> f64 {
     let aa = a / b;
@@ -83,7 +83,8 @@ pub fn closest_approach(b: f64, a: f64) -> Option<f64> {
 ///
 /// # Formula
 /// dφ/dr = r[L r − 2M(L − a)]/(Δ √R), R = r⁴ + (a² − L²)r² + 2M(L − a)²r, Δ = r² − 2Mr + a²
-/// (Carter equations with zero Carter constant; deflection sheet §2; the integral reduced to
+/// (Carter 1968, Phys. Rev. 174, 1559: the separated equations with zero Carter constant; the
+/// θ-form and its factorization are derived in docs/physics/deflection.md §2; the integral reduced to
 /// elliptic form by Iyer & Hansen 2009, arXiv:0908.0085, whose closed form is not used here).
 /// With s = b/r = s0 sin θ and the exact factorization
 /// Π(s0 t) = s0²(1 − t²)[(1 − A²) − 2ε(1 − A)² s0 g(t)], g(t) = (1 + t + t²)/(1 + t):
@@ -91,11 +92,12 @@ pub fn closest_approach(b: f64, a: f64) -> Option<f64> {
 /// α = 2∫₀^{π/2} { [1 − 2ε(1 − A)s0 t] / ([1 − 2ε s0 t + A² s0² t²] √((1 − A²) − 2ε(1 − A)² s0 g)) − 1 } dθ,
 ///
 /// with the "− 1" carried out algebraically inside the integrand so that no digits are lost
-/// at large b (sheet §2 θ-form, **VERIFIED** there against the BL-r form to < 1e-25).
+/// at large b (docs/physics/deflection.md §2; tests/deflection.rs compares it with an mpmath
+/// evaluation, tests/reference/deflection_mpmath.py).
 ///
 /// # Domain
 /// b > 0, |a_s| ≤ M. b ≤ b_c(a_s) is captured (a result). a_s = 0 reduces to Schwarzschild.
-/// At fixed b, prograde rays (a_s > 0) are deflected less (sheet §2 sign check).
+/// At fixed b, prograde rays (a_s > 0) are deflected less (sign convention: docs/physics/deflection.md §1).
 ///
 /// # Errors
 /// `b` not finite or ≤ 0; `spin` outside [−1, 1]; [`InputError::NoConvergence`] if the
@@ -124,7 +126,7 @@ pub(crate) fn deflection_with_accuracy(b: f64, a: f64) -> Result<(Deflection, f6
     let sigma = turning_point(b, a);
     let r0 = b / sigma;
     if b > 1e30 {
-        // Weak-field terms 4ε + (15π/4)ε² − 4εA are exact to f64 here (sheet §2 table).
+        // Weak-field terms 4ε + (15π/4)ε² − 4εA are exact to f64 here (Sereno & De Luca 2006, astro-ph/0609435, orders ≤ 2).
         let e = 1.0 / b;
         return Ok((Deflection::Scattered { alpha: 4.0 * e + 3.75 * PI * e * e - 4.0 * e * e * a, closest_approach: r0 }, 1e-16));
     }

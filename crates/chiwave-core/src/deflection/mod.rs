@@ -1,16 +1,18 @@
 //! Deflection of light and other massless waves by a mass (Schwarzschild, Kerr equatorial,
 //! Reissner–Nordström), weak-field series, strong-deflection limit, PPN.
 //!
-//! Conventions (deflection sheet §0): G = c = 1, lengths in units of the lens mass M; α is the
+//! Conventions (docs/physics/deflection.md §1): G = c = 1, lengths in units of the lens mass M; α is the
 //! total deflection in radians, positive toward the lens, α = Δφ − π, with b = L/p_∞ and r0 the
 //! areal (Boyer–Lindquist) radius of closest approach. Kerr spin is signed, a_s > 0 prograde.
 //! Capture (b ≤ b_c) is a result, reported with `alpha = None`, never NaN.
 //!
 //! Sources, by piece (every function names its own):
-//! * exact Schwarzschild α: Darwin 1959, Proc. R. Soc. A 249, 180 (sheet §1) — [`schwarzschild`];
-//! * Kerr equatorial: Carter-equation θ-form (sheet §2), photon orbits Bardeen, Press &
+//! * exact Schwarzschild α: Darwin 1959, Proc. R. Soc. A 249, 180 — [`schwarzschild`];
+//! * Kerr equatorial: Carter-equation θ-form (Carter 1968, Phys. Rev. 174, 1559;
+//!   docs/physics/deflection.md §2), photon orbits Bardeen, Press &
 //!   Teukolsky 1972, ApJ 178, 347 — [`kerr`];
-//! * Reissner–Nordström: sheet §2 — [`reissner_nordstrom`];
+//! * Reissner–Nordström: Chandrasekhar 1983, *The Mathematical Theory of Black Holes*, ch. 5;
+//!   θ-form in docs/physics/deflection.md §2 — [`reissner_nordstrom`];
 //! * weak-field series: Keeton & Petters 2005, gr-qc/0511019 (orders 1–4), generated in code to
 //!   order 12 — [`series`];
 //! * strong-deflection limit: Bozza 2002, gr-qc/0208075 — [`strong`];

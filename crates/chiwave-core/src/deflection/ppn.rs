@@ -1,4 +1,5 @@
-//! Parametrized post-Newtonian (PPN) deflection (deflection sheet §3).
+//! Parametrized post-Newtonian (PPN) deflection (Will 2014, Living Rev. Relativ. 17, 4,
+//! arXiv:1403.7377; at finite elongation Lambert & Le Poncin-Lafitte 2009, arXiv:0903.1615).
 //!
 //! α_PPN = [(1 + γ)/2]·4M/b for source and observer at infinity (Will 2014, Living Rev. Rel.
 //! 17, 4, arXiv:1403.7377); for an observer at finite distance seeing the ray at elongation φ
@@ -29,7 +30,8 @@ pub struct Ppn {
 /// # Examples
 /// ```
 /// use chiwave_core::deflection::ppn::alpha_1pm;
-/// // Deflection sheet §3: Jupiter limb, GM = 1.2668653e17, b = 7.1492e7 m → 7.88663205425717e-8 rad.
+/// // Jupiter limb, IAU 2015 B3 nominal GM = 1.2668653e17 m³/s², R = 7.1492e7 m (Prša et al. 2016,
+/// // arXiv:1605.09788): 4GM/(c²R) = 7.88663205425717e-8 rad (evaluated by hand).
 /// let m = 1.266_865_3e17 / 299_792_458f64.powi(2);
 /// assert!((alpha_1pm(7.149_2e7 / m, 1.0) / 7.886_632_054_257_17e-8 - 1.0).abs() < 1e-13);
 /// ```

@@ -1,5 +1,5 @@
-//! θ-form quadrature shared by the Kerr and Reissner–Nordström deflections (deflection sheet
-//! §1 quadrature A and §2 θ-form).
+//! θ-form quadrature shared by the Kerr and Reissner–Nordström deflections (derivation:
+//! docs/physics/deflection.md §2).
 //!
 //! The integrand is smooth on [0, π/2] but has a complex singularity near θ = π/2 at a distance
 //! ρ that shrinks as the ray approaches capture. The interval is cut into panels that halve in

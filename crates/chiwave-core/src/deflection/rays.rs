@@ -5,8 +5,8 @@
 //!
 //! The orbit equations are integrated for s = b/r in the parameter τ = b λ, with λ the Mino
 //! time (dτ_proper = r² dλ in the equatorial plane), where they are smooth through the turning
-//! point and well conditioned far from the lens (deflection sheet §2, Carter equations with
-//! zero Carter constant, E = 1, L = b):
+//! point and well conditioned far from the lens (Carter 1968, the separated equations with
+//! zero Carter constant, E = 1, L = b; docs/physics/deflection.md §2):
 //!
 //! (ds/dτ)² = Π(s), d²s/dτ² = Π′(s)/2, dφ/dτ = N/D, with (Kerr, A = a_s/b, ε = M/b)
 //! Π = 1 − (1 − A²)s² + 2ε(1 − A)²s³, N = 1 − 2ε(1 − A)s, D = 1 − 2εs + A²s² (= Δ s²/b²);

@@ -1,29 +1,31 @@
 //! Reissner–Nordström black hole: photon sphere, closest approach, exact light deflection.
 //!
-//! Conventions (deflection sheet §0, §2): G = c = 1, lengths in units of M,
+//! Conventions (docs/physics/deflection.md §1): G = c = 1, lengths in units of M,
 //! f(r) = 1 − 2M/r + Q²/r² with Q in geometrized Gaussian units (SI: Q² → G Q²/(4π ε0 c⁴)),
 //! |Q| ≤ M (the extremal value is allowed). ε = M/b, q = Q/b. Only Q² enters.
 //!
 //! Sources: the metric is Reissner 1916 and Nordström 1918; its photon sphere and light deflection
-//! as used here agree with Eiroa, Romero & Torres 2002, arXiv:gr-qc/0203049 (recalled; the sheet's
-//! forms are the ones verified by the tests).
+//! as used here agree with Eiroa, Romero & Torres 2002, arXiv:gr-qc/0203049 and Chandrasekhar 1983,
+//! *The Mathematical Theory of Black Holes*, ch. 5 (recalled; the tests check each form
+//! independently: the quadrature against mpmath, the series against the quadrature).
 
 use super::quadrature::{singularity_distance, theta_integral};
 use super::Deflection;
 use crate::error::{in_closed, positive, InputError};
 use std::f64::consts::PI;
 
-/// Photon-sphere radius r_ph = [3M + √(9M² − 8Q²)]/2 (deflection sheet §2, **VERIFIED**).
+/// Photon-sphere radius r_ph = [3M + √(9M² − 8Q²)]/2 (Chandrasekhar 1983, ch. 5; the
+/// double root of the orbit equation's quartic).
 pub fn photon_sphere_radius(q: f64) -> f64 {
     0.5 * (3.0 + (9.0 - 8.0 * q * q).max(0.0).sqrt())
 }
 
-/// Critical impact parameter b_c = r_ph²/√(r_ph² − 2M r_ph + Q²) (deflection sheet §2).
+/// Critical impact parameter b_c = r_ph²/√(r_ph² − 2M r_ph + Q²) (Chandrasekhar 1983, ch. 5).
 ///
 /// # Examples
 /// ```
 /// use chiwave_core::deflection::reissner_nordstrom::critical_b;
-/// // Extremal Q = M: r_ph = 2M, b_c = 4M (sheet §2 formulas, evaluated by hand).
+/// // Extremal Q = M: r_ph = 2M, b_c = 4M (Chandrasekhar 1983 formulas, evaluated by hand).
 /// assert!((critical_b(1.0) - 4.0).abs() < 1e-14);
 /// ```
 pub fn critical_b(q: f64) -> f64 {
@@ -74,14 +76,15 @@ pub fn closest_approach(b: f64, q: f64) -> Option<f64> {
 /// Exact deflection of light by a Reissner–Nordström black hole.
 ///
 /// # Formula
-/// (du/dφ)² = 1/b² − u² + 2Mu³ − Q²u⁴ (deflection sheet §2). With s = bu = s0 sin θ and the
+/// (du/dφ)² = 1/b² − u² + 2Mu³ − Q²u⁴ (Chandrasekhar 1983, ch. 5; θ-form derived in
+/// docs/physics/deflection.md §2). With s = bu = s0 sin θ and the
 /// exact factorization Π(s0 t) = s0²(1 − t²)[1 − 2ε s0 g(t) + q² s0² (1 + t²)],
 /// g(t) = (1 + t + t²)/(1 + t):
 ///
 /// α = 2∫₀^{π/2} [W^{−1/2} − 1] dθ, W = 1 − 2ε s0 g(sin θ) + q² s0² (1 + sin²θ),
 ///
-/// with W^{−1/2} − 1 = w/(√W(1 + √W)), w = 1 − W, so that no digits are lost at large b (the
-/// sheet's two quadratures agree to < 1e-25, **VERIFIED**).
+/// with W^{−1/2} − 1 = w/(√W(1 + √W)), w = 1 − W, so that no digits are lost at large b (tests/deflection.rs
+/// compares it with an mpmath evaluation, tests/reference/deflection_mpmath.py).
 ///
 /// # Domain
 /// b > 0, |Q| ≤ M; b ≤ b_c(Q) is captured (a result). Q = 0 reduces to Schwarzschild.
@@ -111,7 +114,7 @@ pub(crate) fn deflection_with_accuracy(b: f64, q: f64) -> Result<(Deflection, f6
     }
     let r0 = turning_point(b, q)?;
     if b > 1e30 {
-        // Weak-field terms 4ε + (15π/4)ε² − (3π/4)q² are exact to f64 here (sheet §2 table).
+        // Weak-field terms 4ε + (15π/4)ε² − (3π/4)q² are exact to f64 here (Keeton & Petters 2005, gr-qc/0511019, RN section).
         let e = 1.0 / b;
         return Ok((Deflection::Scattered { alpha: 4.0 * e + (3.75 - 0.75 * q * q) * PI * e * e, closest_approach: r0 }, 1e-16));
     }

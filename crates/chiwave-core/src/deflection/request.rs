@@ -205,6 +205,7 @@ impl LightRequest {
         });
         let alpha_arcsec = physical.as_ref().and_then(|p| p.alpha_arcsec);
         let flags = flags::light(&v, d, alpha, &series, &acc);
+        let (sources, citations) = sources::light(v.metric);
         Ok(LightResult {
             best: acc.best,
             tolerance: v.tolerance,
@@ -222,7 +223,8 @@ impl LightRequest {
             physical,
             estimates: acc.estimates,
             flags,
-            sources: sources::light(v.metric),
+            sources,
+            citations,
         })
     }
 }

@@ -2,9 +2,9 @@
 //! order written here).
 
 use super::{ppn, strong};
+use crate::references::{CitationMap, SourceMap};
 use crate::validity::{Best, ErrorEstimate, Estimates, Flag};
 use serde::Serialize;
-use std::collections::BTreeMap;
 
 /// One weak-field partial sum.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -80,6 +80,8 @@ pub struct LightResult {
     /// strong-deflection values), keyed by their JSON key.
     pub estimates: Estimates,
     pub flags: Vec<Flag>,
-    /// Output key → citation of the formula that produced it.
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → citation of the formula that produced it (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
 }

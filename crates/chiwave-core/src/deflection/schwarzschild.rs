@@ -1,7 +1,7 @@
 //! Schwarzschild null geodesics: closest approach, capture, exact deflection (Darwin's
 //! elliptic-integral form).
 //!
-//! Units: G = c = 1, lengths in units of the lens mass M (deflection sheet §0). α is the total
+//! Units: G = c = 1, lengths in units of the lens mass M (docs/physics/deflection.md §1). α is the total
 //! deflection in radians, positive toward the lens, α = Δφ − π.
 
 use super::Deflection;
@@ -11,16 +11,16 @@ use std::f64::consts::{FRAC_PI_4, PI};
 /// Critical impact parameter b_c = 3√3 M (photon sphere r = 3M).
 ///
 /// # Formula
-/// b_c = 3√3 M (deflection sheet §1, **VERIFIED**; Darwin 1959, Proc. R. Soc. A 249, 180).
+/// b_c = 3√3 M (Darwin 1959, Proc. R. Soc. A 249, 180).
 pub const CRITICAL_B: f64 = 5.196_152_422_706_632;
 
-/// Photon-sphere radius r = 3M (deflection sheet §1).
+/// Photon-sphere radius r = 3M (Darwin 1959).
 pub const PHOTON_SPHERE: f64 = 3.0;
 
 /// Impact parameter of the ray whose closest approach is `r0` (units of M).
 ///
 /// # Formula
-/// b(r0) = r0 / √(1 − 2M/r0) (deflection sheet §1, **VERIFIED**).
+/// b(r0) = r0 / √(1 − 2M/r0) (Darwin 1959; the turning point of the orbit equation).
 ///
 /// # Domain
 /// r0 > 2M (outside the horizon); r0 > 3M for a ray that escapes. Returns `None` for r0 ≤ 2 or
@@ -29,7 +29,7 @@ pub const PHOTON_SPHERE: f64 = 3.0;
 /// # Examples
 /// ```
 /// use chiwave_core::deflection::schwarzschild::impact_parameter;
-/// // At the photon sphere b = 3√3 M (deflection sheet §1).
+/// // At the photon sphere b = 3√3 M (Darwin 1959).
 /// assert!((impact_parameter(3.0).unwrap() - 27f64.sqrt()).abs() < 1e-14);
 /// ```
 pub fn impact_parameter(r0: f64) -> Option<f64> {
@@ -44,7 +44,8 @@ pub fn impact_parameter(r0: f64) -> Option<f64> {
 /// b is not finite and positive.
 ///
 /// # Formula
-/// r0 = (2b/√3) cos[(1/3) arccos(−3√3 M/b)] (deflection sheet §1, **VERIFIED**), polished near
+/// r0 = (2b/√3) cos[(1/3) arccos(−3√3 M/b)] (the trigonometric root of r³ − b²r + 2Mb² = 0;
+/// Darwin 1959), polished near
 /// capture by Newton's method on the exact relation for δ = r0 − 3M,
 /// δ²(9 + δ) = (b² − 27)(1 + δ), which follows from b² = r0³/(r0 − 2) and has no cancellation
 /// as b → b_c (b² − 27 is formed as (b − b_c)(b + b_c)).
@@ -98,8 +99,8 @@ fn photon_offset(b: f64) -> Option<f64> {
 /// Exact deflection angle of a light ray with impact parameter `b` (units of M).
 ///
 /// # Formula
-/// Darwin 1959 (Proc. R. Soc. A 249, 180), as re-derived in the deflection sheet §1
-/// (**VERIFIED** against two quadratures to < 1e-25): with P = r0, Q = √((P − 2)(P + 6)),
+/// Darwin 1959 (Proc. R. Soc. A 249, 180), in the form written in docs/physics/deflection.md §2
+/// (tests/deflection.rs checks it against an independent quadrature and mpmath): with P = r0, Q = √((P − 2)(P + 6)),
 /// k² = (Q − P + 6)/(2Q) and sin²φ0 = (Q − P + 2)/(Q − P + 6),
 /// α = 4√(P/Q) [K(k) − F(φ0, k)] − π.
 ///
@@ -218,7 +219,7 @@ mod tests {
 
     #[test]
     fn newton_polish_near_capture() {
-        // b(r0) round trip (sheet §1 formula b(r0)): r0 = 3 + δ → b → r0.
+        // b(r0) round trip (Darwin 1959, b(r0)): r0 = 3 + δ → b → r0.
         // Rounding of b alone moves δ by ≈ 3e-16/δ (δ² ≈ (b² − 27)/9), hence the bound.
         for d in [1e-5, 1e-3, 0.1, 2.0, 15.0] {
             let b = impact_parameter(3.0 + d).unwrap();

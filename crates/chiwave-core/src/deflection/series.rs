@@ -1,7 +1,7 @@
 //! Weak-field series α = Σ c_n (M/b)ⁿ, with the coefficients generated in code.
 //!
 //! # Method
-//! The exact θ-integrands (deflection sheet §1 quadrature A, §2 Kerr θ-form and RN form) are
+//! The exact θ-integrands (docs/physics/deflection.md §2: Schwarzschild, Kerr and RN forms) are
 //! expanded as truncated power series in two small variables, (ε, A) = (M/b, a_s/b) for Kerr
 //! and (ε, q) = (M/b, Q/b) for Reissner–Nordström, at every node of a 64-point Gauss–Legendre
 //! rule in θ. The turning point s0 = b/r0 is itself expanded by fixed-point iteration of
@@ -9,15 +9,15 @@
 //! ε^j x^k at once; the integrands are entire in θ apart from poles of 1/(1 + sin θ) at
 //! θ = −π/2, so the rule is exact to rounding. Schwarzschild is the k = 0 column.
 //!
-//! This is a different route from the sheet's (I_n integrals and series reversion, which the
-//! reference script tests/reference/deflection_mpmath.py follows); the tests compare the two,
+//! This is a different route from the one in docs/physics/deflection.md §3 (I_n integrals and
+//! series reversion, which the reference script tests/reference/deflection_mpmath.py follows); the tests compare the two,
 //! and orders 1–4 with Keeton & Petters 2005 (gr-qc/0511019).
 //!
 //! For a lens with spin a_s (or charge Q) in units of M, the order-n coefficient is
 //! c_n = Σ_k C_{n−k,k} a_sᵏ (or Qᵏ), so the n-th term is c_n (M/b)ⁿ.
 //!
 //! # Convergence
-//! The Schwarzschild series converges only for b > 3√3 M (sheet §1; radius set by capture).
+//! The Schwarzschild series converges only for b > 3√3 M (its radius is set by the capture singularity; docs/physics/deflection.md §3).
 //! For Kerr and RN the same behaviour (divergence at b ≤ b_c) is expected but not proven here.
 
 use crate::numeric::gauss_legendre;
@@ -185,13 +185,13 @@ fn table(fam: Family) -> &'static Bi {
 /// Generated coefficient C_{j,k} of εʲ A^k (Kerr: A = a_s/b, signed, + prograde), j + k ≤ 12.
 ///
 /// # Formula
-/// Term-by-term expansion of the Kerr θ-form (deflection sheet §2); see the module docs.
-/// The sheet's table (orders 1–6, **VERIFIED-num**) has e.g. C_{1,1} = −4, C_{2,1} = −10π.
+/// Term-by-term expansion of the Kerr θ-form (docs/physics/deflection.md §2); see the module docs.
+/// Low orders: C_{1,1} = −4, C_{2,1} = −10π (Sereno & De Luca 2006, astro-ph/0609435).
 ///
 /// # Examples
 /// ```
 /// use chiwave_core::deflection::series::kerr_coefficient;
-/// // Deflection sheet §2 Kerr table, order 3: −10π ε² A.
+/// // Sereno & De Luca 2006 (astro-ph/0609435), order 3: −10π ε² A.
 /// assert!((kerr_coefficient(2, 1).unwrap() + 10.0 * std::f64::consts::PI).abs() < 1e-11);
 /// ```
 pub fn kerr_coefficient(j: usize, k: usize) -> Option<f64> {
@@ -203,7 +203,7 @@ pub fn kerr_coefficient(j: usize, k: usize) -> Option<f64> {
 /// # Examples
 /// ```
 /// use chiwave_core::deflection::series::rn_coefficient;
-/// // Deflection sheet §2 RN table, order 2: −(3π/4) q² (survives as M → 0).
+/// // Keeton & Petters 2005 (gr-qc/0511019), RN order 2: −(3π/4) q² (survives as M → 0).
 /// assert!((rn_coefficient(0, 2).unwrap() + 0.75 * std::f64::consts::PI).abs() < 1e-12);
 /// ```
 pub fn rn_coefficient(j: usize, k: usize) -> Option<f64> {
@@ -213,7 +213,8 @@ pub fn rn_coefficient(j: usize, k: usize) -> Option<f64> {
 /// Schwarzschild coefficients c_1 … c_n of α = Σ c_n (M/b)ⁿ (n ≤ 12).
 ///
 /// # Formula
-/// c_n = C_{n,0} of the Kerr expansion. Known values (deflection sheet §1): 4, 15π/4, 128/3,
+/// c_n = C_{n,0} of the Kerr expansion. Known values (Keeton & Petters 2005, gr-qc/0511019, orders 1–4; higher ones from
+/// tests/reference/deflection_mpmath.py): 4, 15π/4, 128/3,
 /// 3465π/64 (Keeton & Petters 2005, gr-qc/0511019), 3584/5, 255255π/256, 98304/7,
 /// 334639305π/16384, …
 ///
@@ -243,7 +244,7 @@ pub fn rn_coefficients(q: f64, n: usize) -> Vec<f64> {
 }
 
 /// Partial sums S_n = Σ_{k ≤ n} c_k (M/b)ᵏ for n = 1 … len(c), with the first term scaled by
-/// `first_scale` (the PPN factor (1 + γ)/2, deflection sheet §3).
+/// `first_scale` (the PPN factor (1 + γ)/2, Will 2014, arXiv:1403.7377).
 pub fn partial_sums(c: &[f64], b: f64, first_scale: f64) -> Vec<f64> {
     let e = 1.0 / b;
     let mut s = 0.0;

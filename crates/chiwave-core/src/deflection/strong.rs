@@ -1,22 +1,23 @@
 //! Strong-deflection (logarithmic) limit for Schwarzschild, b → b_c⁺.
 //!
 //! Source: Bozza 2002, Phys. Rev. D 66, 103001, gr-qc/0208075 (leading terms); the next-order
-//! term is the deflection sheet's §1 fit (**VERIFIED-num**: 5/18 confirmed to 14 digits), to be
-//! compared with Iyer & Petters 2007 (gr-qc/0611086), whose printed coefficients were not
+//! term was fitted to the exact angle in high precision (docs/physics/deflection.md §3; the
+//! coefficient 5/18 identified to 14 digits), to be compared with Iyer & Petters 2007 (gr-qc/0611086), whose printed coefficients were not
 //! compared.
 
 use serde::Serialize;
 
-/// ā = 1 (Bozza 2002, gr-qc/0208075; deflection sheet §1, **VERIFIED**).
+/// ā = 1 (Bozza 2002, gr-qc/0208075, Schwarzschild coefficients).
 pub const ABAR: f64 = 1.0;
 
-/// b̄ = ln[216(7 − 4√3)] − π = −0.40023003975526165 (Bozza 2002; sheet §1, **VERIFIED**).
+/// b̄ = ln[216(7 − 4√3)] − π = −0.40023003975526165 (Bozza 2002, gr-qc/0208075).
 pub fn bbar() -> f64 {
     // 7 − 4√3 = 1/(7 + 4√3), formed without cancellation.
     (216.0 / (7.0 + 4.0 * 3f64.sqrt())).ln() - std::f64::consts::PI
 }
 
-/// D1 = 1/18 + 2√3/9 + (5/18)(b̄ + π) = 1.20194534996934 (sheet §1, **VERIFIED-num**).
+/// D1 = 1/18 + 2√3/9 + (5/18)(b̄ + π) = 1.20194534996934 (chiwave's fit, docs/physics/deflection.md §3;
+/// tests/reference/deflection_mpmath.py).
 pub fn d1() -> f64 {
     1.0 / 18.0 + 2.0 * 3f64.sqrt() / 9.0 + 5.0 / 18.0 * (bbar() + std::f64::consts::PI)
 }
@@ -42,8 +43,8 @@ pub struct StrongDeflection {
 /// Leading strong-deflection form α ≈ −ā ln(b/b_c − 1) + b̄ (Bozza 2002, gr-qc/0208075).
 ///
 /// # Formula
-/// α_SDL = −ln d + b̄, d = b/b_c − 1; error O(d ln d) (sheet §1). Next order:
-/// α ≈ −ln d + b̄ + d[−(5/18) ln d + D1] (sheet §1 fit, **VERIFIED-num**).
+/// α_SDL = −ln d + b̄, d = b/b_c − 1; error O(d ln d) (Bozza 2002). Next order:
+/// α ≈ −ln d + b̄ + d[−(5/18) ln d + D1] (chiwave's fit, docs/physics/deflection.md §3).
 ///
 /// # Domain
 /// d > 0 (returns `None` otherwise); useful for d ≲ 10⁻².

@@ -24,7 +24,9 @@
 //!
 //! # Conventions
 //! One-sided power spectral density S_n(f) in Hz⁻¹, ASD = √S_n in Hz^−1/2, frequencies in Hz.
-//! The equations and constants above are transcribed from the papers as recalled; the
+//! The equations and constants above are transcribed from the papers as recalled (none of the
+//! equations could be seen in a literature search; the aLIGO form may be the Sathyaprakash &
+//! Schutz 2009 fit rather than Ajith's: docs/physics/detection.md); the
 //! transcription is checked against an independent mpmath implementation
 //! (`tests/reference/noise_curves_mpmath.py`) and against the curves' documented features in
 //! `tests/detection_noise.rs`.
@@ -247,7 +249,7 @@ impl NoiseCurve {
     /// The primary source of the curve, with the equations used.
     pub fn source(&self) -> &'static str {
         match self {
-            NoiseCurve::AdvancedLigo => "Ajith 2011, arXiv:1107.1267 (Phys. Rev. D 84, 084037): analytic fit to the Advanced LIGO zero-detuned high-power design noise, S_n = 1e-49 [x^-4.14 - 5x^-2 + 111(1 - x^2 + x^4/2)/(1 + x^2/2)], x = f/245.4 Hz, from 10 Hz",
+            NoiseCurve::AdvancedLigo => "Ajith 2011, arXiv:1107.1267 (Phys. Rev. D 84, 084037): analytic fit to the Advanced LIGO zero-detuned high-power design noise, S_n = 1e-49 [x^-4.14 - 5x^-2 + 111(1 - x^2 + x^4/2)/(1 + x^2/2)], x = f/245.4 Hz, from 10 Hz (as recalled; not confirmed against the paper, see docs/physics/detection.md)",
             NoiseCurve::Lisa { confusion: None } => "Robson, Cornish & Liu 2019, arXiv:1803.01944 (Class. Quantum Grav. 36, 105011), eqs. (10), (11), (13): sky-averaged LISA instrument noise, L = 2.5 Gm",
             NoiseCurve::Lisa { confusion: Some(_) } => "Robson, Cornish & Liu 2019, arXiv:1803.01944 (Class. Quantum Grav. 36, 105011), eqs. (10), (11), (13) instrument noise plus eq. (14) galactic confusion noise with the Table 1 coefficients for the observation time",
             NoiseCurve::Table(_) => "user-supplied table of amplitude spectral density, interpolated linearly in (ln f, ln ASD)",

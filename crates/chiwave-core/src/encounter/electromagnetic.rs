@@ -82,6 +82,7 @@ pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<EmResult, InputErr
     if let Some(p) = &physical {
         flags::physical(&mut flags, p.sommerfeld, p.compton_over_b);
     }
+    let (sources, citations) = sources::electromagnetic();
     Ok(EmResult {
         force: "em",
         best: acc.best,
@@ -104,7 +105,8 @@ pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<EmResult, InputErr
         orders,
         estimates: acc.estimates,
         flags,
-        sources: sources::electromagnetic(),
+        sources,
+        citations,
         physical,
         notice: crate::validity::ESTIMATE_NOTICE,
     })

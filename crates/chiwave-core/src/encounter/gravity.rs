@@ -111,6 +111,7 @@ pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<GravityResult, Inp
     if let Some(p) = &physical {
         flags::physical(&mut flags, p.sommerfeld, p.compton_over_b);
     }
+    let (sources, citations) = sources::gravity();
     Ok(GravityResult {
         force: "gravity",
         best: acc.best,
@@ -142,7 +143,8 @@ pub(crate) fn evaluate(s: &TwoBodySystem, tol: f64) -> Result<GravityResult, Inp
         orders,
         estimates: acc.estimates,
         flags,
-        sources: sources::gravity(),
+        sources,
+        citations,
         physical,
         notice: crate::validity::ESTIMATE_NOTICE,
     })

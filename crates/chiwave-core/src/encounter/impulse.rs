@@ -1,5 +1,5 @@
 //! Impulse (momentum kick) of body 1 through O(G³), conservative and radiative
-//! (encounter sheet §2).
+//! (construction: docs/physics/encounter.md §4).
 //!
 //! Δp₁^μ = c_b b̂^μ + c_u1 u₁^μ + c_u2 u₂^μ, mostly-minus metric, b̂ the unit spacelike vector
 //! from body 2 to body 1 orthogonal to u₁ and u₂ (attraction: c_b < 0). Units: M c with
@@ -8,8 +8,8 @@
 //! Sources: Westpfahl 1985 and Kosower, Maybee, O'Connell 2018, arXiv:1811.10950 (LO, NLO
 //! transverse); transverse O(G³) from p sin χ with the 3PM angle (Bern et al. 2019,
 //! arXiv:1901.04424; Damour 2020, arXiv:2010.01641); longitudinal parts re-derived from the
-//! on-shell conditions (sheet §2.1, VERIFIED conservative, DERIVED radiative from
-//! Herrmann et al. 2021, arXiv:2101.07255).
+//! on-shell conditions (docs/physics/encounter.md §4; the radiative part follows from
+//! P_rad^μ ∝ u₁ + u₂ of Herrmann et al. 2021, arXiv:2101.07255).
 
 use serde::Serialize;
 
@@ -80,7 +80,7 @@ impl ImpulseInput {
 /// Q₃ = p [2χ₃ − (2χ₁)³/6]/j³ (from p sin χ). c_b = −(Q₁ + Q₂ + Q₃).
 /// Conservative longitudinal: c_u1 = −K(γ m1 + m2), c_u2 = +K(γ m2 + m1),
 /// K = (Q₁² + 2Q₁Q₂)/(2 m1 m2 p∞²). Radiative: c_u1 += −γ ε/p∞², c_u2 += ε/p∞², ε = u₂·P_rad
-/// (encounter sheet §2.1).
+/// (docs/physics/encounter.md §4).
 pub fn covariant(inp: &ImpulseInput) -> CovariantSplit {
     use std::f64::consts::PI;
     let ImpulseInput { m1, m2, gamma: g, p_inf, p_cm, b, j, chi, eps_rad, .. } = *inp;
@@ -101,7 +101,7 @@ pub fn covariant(inp: &ImpulseInput) -> CovariantSplit {
     CovariantSplit { conservative, radiative, total }
 }
 
-/// Frame components of Δp₁ from covariant coefficients (encounter sheet §2.2).
+/// Frame components of Δp₁ from covariant coefficients (docs/physics/encounter.md §4).
 ///
 /// # Formula
 /// CM: u₁ = (E₁/m1, +p e/m1), u₂ = (E₂/m2, −p e/m2), E_a = (m_a² + m1 m2 γ)/E:

@@ -3,10 +3,11 @@
 //! chiwave ships **no** NR data. The user gives a CSV with one row per simulation:
 //! `E/M, J/M², ν, χ, σχ` (E and J the initial ADM energy and angular momentum in units G = c = 1,
 //! χ in radians). A header line is optional; lines starting with `#` are comments.
-//! Inputs are converted with the NR-style relations of encounter sheet §0:
+//! Inputs are converted with the relations of docs/physics/encounter.md §1 (Damour 2016,
+//! arXiv:1609.00354, energy map):
 //! γ = 1 + (h² − 1)/(2ν) with h = E/M, and j = (J/(G M²))/ν. Using ADM values of initial data
 //! at finite separation as asymptotic E and J is standard practice (Damour et al. 2014,
-//! arXiv:1402.7307) but an approximation (sheet pitfall 9).
+//! arXiv:1402.7307) but an approximation.
 
 use super::kinematics::{RelativeSpeed, Kinematics, Orbit};
 use super::{eob, pm, testbody, PmAngles};

@@ -1,10 +1,9 @@
 //! Radiated energy–momentum at O(G³) and angular momentum at O(G²) in gravitational scattering.
 //!
 //! Sources: Herrmann, Parra-Martinez, Ruf, Zeng 2021, arXiv:2101.07255 (PRL 126, 201602; long
-//! version arXiv:2104.03957) for P_rad^μ; Damour 2020, arXiv:2010.01641 for J_rad and I(v)
-//! (encounter sheet §1.4, §3). Units G = c = 1, M = m1 + m2 = 1, b in GM/c².
+//! version arXiv:2104.03957) for P_rad^μ; Damour 2020, arXiv:2010.01641 for J_rad and I(v). Units G = c = 1, M = m1 + m2 = 1, b in GM/c².
 //!
-//! Both E(γ) and I(v) cancel catastrophically as v → 0 (sheet pitfall 6): below
+//! Both E(γ) and I(v) cancel catastrophically as v → 0 (their 1/v³ and 1/v² terms cancel): below
 //! [`SERIES_SWITCH_V`] they are evaluated from their small-velocity series, whose coefficients
 //! make the switch continuous to ≤ 1e-12 relative (tested).
 
@@ -20,7 +19,8 @@ pub const SERIES_SWITCH_V: f64 = 0.3;
 
 /// E(γ)/(π v) = Σ_k A[k] v^{2k}: Taylor coefficients by Cauchy integral in mpmath 1.3
 /// (mp.taylor, method = 'quad', radius 0.5 in v², mp.dps = 40), tests/reference/encounter_mpmath.py.
-/// The first three equal 37/15, 2393/840, 61703/10080 (encounter sheet §3.1).
+/// The first three equal 37/15, 2393/840, 61703/10080 (the v-series of Herrmann et al. 2021's E(γ),
+/// tests/reference/waveform_herrmann.py).
 #[allow(clippy::excessive_precision)] // quoted with the digits the script printed
 const E_SERIES: [f64; 24] = [
     2.466666666666666667,
@@ -56,7 +56,7 @@ const E_SERIES: [f64; 24] = [
 /// E/π = f₁ + f₂ ln((γ+1)/2) + f₃ γ arccosh(γ)/√(γ²−1), with
 /// f₁ = (210γ⁶ − 552γ⁵ + 339γ⁴ − 912γ³ + 3148γ² − 3336γ + 1151)/(48(γ²−1)^{3/2}),
 /// f₂ = −(35γ⁴ + 60γ³ − 150γ² + 76γ − 5)/(8√(γ²−1)),
-/// f₃ = (2γ² − 3)(35γ⁴ − 30γ² + 11)/(16(γ²−1)^{3/2})  (**16**, encounter sheet §3.1 form).
+/// f₃ = (2γ² − 3)(35γ⁴ − 30γ² + 11)/(16(γ²−1)^{3/2})  (**16** in this form; with 8 the last term carries 1/(2√(γ²−1))).
 /// For v < 0.3: E = π v Σ A_k v^{2k} (24 terms; A₀ = 37/15 is the Newtonian quadrupole value).
 ///
 /// # Domain
@@ -68,7 +68,7 @@ const E_SERIES: [f64; 24] = [
 /// use chiwave_core::encounter::radiated::e_function;
 /// // mpmath 1.3, dps 40, tests/reference/encounter_mpmath.py: E(1.5) = 24.19824348449789
 /// assert!((e_function(1.5) / 24.19824348449789 - 1.0).abs() < 1e-13);
-/// // v → 0: E/(π v) → 37/15 (encounter sheet §3.1)
+/// // v → 0: E/(π v) → 37/15 (the Newtonian straight-line quadrupole energy, docs/physics/waveform.md §4)
 /// assert!((e_function(1.0 + 5e-9) / (std::f64::consts::PI * 1e-4) - 37.0 / 15.0).abs() < 1e-6);
 /// ```
 pub fn e_function(gamma: f64) -> f64 {
@@ -107,14 +107,13 @@ fn e_of(g: f64, x: f64, p: f64) -> f64 {
     PI * (f1 + f2 * (0.5 * x).ln_1p() + f3 * g * (x + p).ln_1p() / p)
 }
 
-/// I(v) of Damour 2020 (arXiv:2010.01641; encounter sheet §1.4), entering χ₃^rad and J_rad.
+/// I(v) of Damour 2020 (arXiv:2010.01641), entering χ₃^rad and J_rad.
 ///
 /// # Formula
 /// I(v) = −16/3 + 2/v² + 2(3v² − 1) arctanh(v)/v³. For v < 0.3 the exact series
 /// I = Σ_{k≥1} [6/(2k+1) − 2/(2k+3)] v^{2k} = (8/5)v² + (32/35)v⁴ + (40/63)v⁶ + …
-/// (from arctanh(v)/v = Σ v^{2n}/(2n+1); note: the sheet's listed 2nd and 3rd numerical
-/// coefficients 12/35 and 8/63 disagree with its own general term and with the closed form,
-/// which the tests check against mpmath).
+/// (from arctanh(v)/v = Σ v^{2n}/(2n+1); the series and the closed form are checked against
+/// mpmath in the tests).
 ///
 /// # Domain
 /// 0 ≤ v < 1; I(0) = 0; v → 1: I → 4 ln(2γ) − 10/3 (diverges); outside → NaN.
@@ -163,7 +162,7 @@ fn i_series(v: f64) -> f64 {
     s
 }
 
-/// CM-frame radiated energy E_rad/(M c²) = ν² (GM/b)³ E(γ)/h (encounter sheet §3.1).
+/// CM-frame radiated energy E_rad/(M c²) = ν² (GM/b)³ E(γ)/h (Herrmann et al. 2021, arXiv:2101.07255, in the CM frame).
 ///
 /// Source: Herrmann, Parra-Martinez, Ruf, Zeng 2021, arXiv:2101.07255. Slow limit:
 /// E_rad → (37π/15) G³ m1² m2² v/b³.
@@ -172,7 +171,7 @@ pub fn e_rad(b: &RelativeSpeed, nu: f64, h: f64, b_over_gm: f64) -> f64 {
 }
 
 /// CM-frame recoil: the radiated 3-momentum along body 1's incoming direction, units of M c,
-/// P_rad = (G³ m1² m2²/b³) E(γ)/(γ + 1) · p (1/m1 − 1/m2) (encounter sheet §3.1; from
+/// P_rad = (G³ m1² m2²/b³) E(γ)/(γ + 1) · p (1/m1 − 1/m2) (from Herrmann et al. 2021,
 /// arXiv:2101.07255, P_rad ∝ u1 + u2). The mechanical recoil of the pair is −P_rad.
 pub fn p_rad_cm(b: &RelativeSpeed, m1: f64, m2: f64, p_cm: f64, b_over_gm: f64) -> f64 {
     let nu = m1 * m2;
@@ -181,8 +180,8 @@ pub fn p_rad_cm(b: &RelativeSpeed, m1: f64, m2: f64, p_cm: f64, b_over_gm: f64) 
 
 /// Radiated angular momentum at O(G²), J_rad/J = 2(2γ² − 1) ν p∞ I(v)/(h² j²).
 ///
-/// Source: Damour 2020, arXiv:2010.01641 (encounter sheet §3.2, VERIFIED: slow limit
-/// J_rad → (16/5) G² m1² m2² v²/(M b)).
+/// Source: Damour 2020, arXiv:2010.01641 (slow limit J_rad → (16/5) G² m1² m2² v²/(M b),
+/// the quadrupole result on the straight line).
 pub fn j_rad_over_j(b: &RelativeSpeed, nu: f64, h: f64, j: f64) -> f64 {
     2.0 * (2.0 * b.gamma * b.gamma - 1.0) * nu * b.p_inf * i_of_speed(b) / (h * h * j * j)
 }

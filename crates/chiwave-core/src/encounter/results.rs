@@ -5,7 +5,7 @@ use super::{eob, impulse};
 use crate::two_body::Kinematics;
 use crate::validity::{Best, ErrorEstimate, Estimates, Flag};
 use serde::Serialize;
-use std::collections::BTreeMap;
+use crate::references::{CitationMap, SourceMap};
 
 /// The cumulative PM angles (radians). JSON keys `1pm`, `2pm`, `3pm_conservative`, `3pm`.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -166,7 +166,10 @@ pub struct GravityResult {
     /// Error estimates of `chi_newtonian`, `chi_test_body`, `chi_estimate`, `e_rad`, `j_rad`.
     pub estimates: Estimates,
     pub flags: Vec<Flag>,
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → citation (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
     pub physical: Option<GravityPhysical>,
     pub notice: &'static str,
 }
@@ -248,7 +251,10 @@ pub struct EmResult {
     /// Error estimates of `chi_test_exact`, `e_rad`, `e_rad_dipole`, `j_rad`.
     pub estimates: Estimates,
     pub flags: Vec<Flag>,
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → citation (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
     pub physical: Option<EmPhysical>,
     pub notice: &'static str,
 }

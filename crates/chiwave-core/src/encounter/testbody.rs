@@ -1,7 +1,8 @@
 //! Test-body (ν → 0) limit: exact Schwarzschild timelike-geodesic scattering angle, its capture
 //! threshold, and its PM coefficients generated to any order.
 //!
-//! Orbit (encounter sheet §5.2, deflection sheet §5), with y = j·GM/r and ε = 1/j:
+//! Orbit (Chandrasekhar 1983, *The Mathematical Theory of Black Holes*, ch. 3;
+//! docs/physics/encounter.md §3), with y = j·GM/r and ε = 1/j:
 //! (dy/dφ)² = F(y) = p∞² + 2εy − y² + 2εy³ = 2ε (y₀ − y)(y₁ − y)(y − y₂),
 //! χ = 2∫₀^{y₀} dy/√F − π. Capture when F has no positive root.
 
@@ -71,8 +72,11 @@ fn table() -> &'static Vec<Vec<f64>> {
 /// Cimento B 101, 127; used for the PM angle in Damour 2018, arXiv:1710.10599):
 /// χ_n = binom(−1/2, n) 2ⁿ Σᵢ C(n, i) · ½ p^{2i−n} B((n + 2i + 1)/2, 1/2 − n),
 /// from g(y) = 2y + 2y³ in F = p² − y² + ε g(y) and Pf∫₀^p y^m (p² − y²)^{−1/2−n} dy =
-/// ½ p^{m−2n} B((m+1)/2, 1/2 − n). Checked against χ₁…χ₆ of encounter sheet §1.1–§1.5 and against
-/// the exact quadrature (tests).
+/// ½ p^{m−2n} B((m+1)/2, 1/2 − n). Checked (tests/encounter.rs) against the closed forms of
+/// χ₁…χ₆ (χ₁–χ₃: the ν → 0 limits of Damour 2018, arXiv:1710.10599 and Bern et al. 2019,
+/// arXiv:1901.04424; χ₄: Damour 2020, arXiv:1912.02139; χ₅, χ₆: a high-precision fit of the exact
+/// quadrature with integer-relation identification, recalled from memory) and against the exact
+/// quadrature.
 ///
 /// # Domain
 /// n in 1..=12; returns `None` otherwise.
@@ -81,7 +85,7 @@ fn table() -> &'static Vec<Vec<f64>> {
 /// ```
 /// use chiwave_core::encounter::{kinematics::RelativeSpeed, testbody};
 /// let b = RelativeSpeed::from_gamma(2.0).unwrap();
-/// // χ₂^Schw = (3π/8)(5γ² − 1) = (3π/8)·19 (encounter sheet §1.2)
+/// // χ₂^Schw = (3π/8)(5γ² − 1) = (3π/8)·19 (Bini & Damour 2017, arXiv:1706.06877, ν → 0)
 /// let c2 = testbody::pm_coefficient(2, &b).unwrap();
 /// assert!((c2 - 3.0 * std::f64::consts::PI / 8.0 * 19.0).abs() < 1e-13);
 /// ```
@@ -102,7 +106,8 @@ pub fn pm_coefficient(n: usize, b: &RelativeSpeed) -> Option<f64> {
 ///
 /// # Formula
 /// r_c = [3γ² − 4 + γ√(9γ² − 8)] / (2(γ² − 1)), j_c = L_c = r_c/√(r_c − 3) (units GM;
-/// deflection sheet §5, VERIFIED by bracketing there). Limits: γ → ∞: j_c/p∞ → 3√3;
+/// the unstable circular orbit of the Schwarzschild effective potential, Misner, Thorne & Wheeler
+/// 1973, §25.5; checked by bracketing in tests/encounter.rs). Limits: γ → ∞: j_c/p∞ → 3√3;
 /// γ → 1: j_c → 4.
 ///
 /// # Examples
@@ -143,9 +148,9 @@ fn rules() -> [&'static Rule; 2] {
 /// = 2ε(y₁ − y)(y − y₂):
 /// χ/2 = ∫₀^{y₀} [F^{−1/2} − (y₀² − y²)^{−1/2}] dy (the subtracted term integrates to π/2), whose
 /// integrand is the cancellation-free 2ε(1 + y₀² + y₀y + y²)/[√(y₀ − y) √G √(y₀+y) (√G + √(y₀+y))].
-/// The endpoint substitution y = y₀(1 − s²) (encounter sheet §5.2) followed by
+/// The endpoint substitution y = y₀(1 − s²) (docs/physics/encounter.md §3) followed by
 /// s = √(δ/y₀) sinh t, δ = y₁ − y₀, removes both the square-root endpoint and the logarithmic
-/// peak near capture (deflection sheet pitfall 2) on y ∈ [y₀/2, y₀]; on [0, y₀/2] the variable
+/// peak near capture on y ∈ [y₀/2, y₀]; on [0, y₀/2] the variable
 /// w = √(y − y₂) removes the near-singularity of slow, strongly bent orbits. Composite 12- and
 /// 24-point Gauss–Legendre on unit panels; their difference is the error estimate.
 ///

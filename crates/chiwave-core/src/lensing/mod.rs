@@ -1,7 +1,7 @@
 //! Point-mass lensing (Einstein radius, images, magnifications, time delay) and wave optics
 //! (the Takahashi & Nakamura 2003 amplification factor, in [`wave`]).
 //!
-//! Sources (deflection sheet §4, VERIFIED there): Einstein 1936; Refsdal 1964; Paczyński 1986,
+//! Sources: Einstein 1936; Refsdal 1964; Paczyński 1986,
 //! ApJ 304, 1; Schneider, Ehlers & Falco 1992 (*Gravitational Lenses*); Takahashi & Nakamura 2003,
 //! ApJ 595, 1039, astro-ph/0305055 for the time delay in units of 4GM_Lz/c³ and the wave optics.
 //!
@@ -82,7 +82,7 @@ impl PointLens {
     /// Image positions [x₊, x₋] in units of θ_E (signed; x₋ < 0 is on the far side).
     ///
     /// # Formula
-    /// x± = (u ± √(u² + 4))/2 (Paczyński 1986; deflection sheet §4). x₋ is computed as
+    /// x± = (u ± √(u² + 4))/2 (Paczyński 1986, ApJ 304, 1). x₋ is computed as
     /// −2/(u + √(u² + 4)) (same value, no cancellation at large u).
     ///
     /// # Examples
@@ -100,14 +100,14 @@ impl PointLens {
     /// Signed magnifications [μ₊, μ₋] (μ₋ < 0, the saddle image).
     ///
     /// # Formula
-    /// μ± = ±[(u² + 2)/(2u√(u² + 4)) ± 1/2] (Paczyński 1986; deflection sheet §4). |μ₋| is
+    /// μ± = ±[(u² + 2)/(2u√(u² + 4)) ± 1/2] (Paczyński 1986, ApJ 304, 1). |μ₋| is
     /// computed as 2/(u√(u² + 4)·(u² + 2 + u√(u² + 4))), the same value without cancellation
     /// (it falls like u⁻⁴). μ₊ + μ₋ = 1.
     ///
     /// # Examples
     /// ```
     /// use chiwave_core::lensing::PointLens;
-    /// // Deflection sheet §4 at u = 0.5: μ+ = 1.5914103126635, μ− = −0.591410312663498.
+    /// // Paczyński 1986 formulas at u = 0.5, evaluated by hand: μ+ = 1.5914103126635, μ− = −0.591410312663498.
     /// let [mp, mm] = PointLens::new(0.5).unwrap().magnifications();
     /// assert!((mp - 1.5914103126635).abs() < 1e-12 && (mm + 0.591410312663498).abs() < 1e-12);
     /// ```
@@ -122,13 +122,13 @@ impl PointLens {
     /// Total magnification |μ₊| + |μ₋|.
     ///
     /// # Formula
-    /// μ = (u² + 2)/(u√(u² + 4)) (Paczyński 1986; deflection sheet §4). Limits: μ ≈ 1/u as
+    /// μ = (u² + 2)/(u√(u² + 4)) (Paczyński 1986, ApJ 304, 1). Limits: μ ≈ 1/u as
     /// u → 0, μ − 1 ≈ 2/u⁴ as u → ∞; μ(1) = 3/√5 ≈ 1.342.
     ///
     /// # Examples
     /// ```
     /// use chiwave_core::lensing::PointLens;
-    /// // Deflection sheet §4: μ_tot(0.5) = 2.182820625327.
+    /// // Paczyński 1986 formula, evaluated by hand: μ_tot(0.5) = 2.182820625327.
     /// assert!((PointLens::new(0.5).unwrap().total_magnification() - 2.182820625327).abs() < 1e-12);
     /// ```
     pub fn total_magnification(&self) -> f64 {
@@ -140,7 +140,7 @@ impl PointLens {
     ///
     /// # Formula
     /// ΔT = y√(y² + 4)/2 + ln[(√(y² + 4) + y)/(√(y² + 4) − y)] (Takahashi & Nakamura 2003,
-    /// astro-ph/0305055; deflection sheet §4); the logarithm equals 2 asinh(y/2), used here.
+    /// astro-ph/0305055); the logarithm equals 2 asinh(y/2), used here.
     /// Limits: ΔT ≈ 2y for y → 0, ΔT ≈ y²/2 + 2 ln y for y → ∞.
     ///
     /// # Examples
@@ -159,7 +159,7 @@ impl PointLens {
 ///
 /// # Formula
 /// θ_E = √(4 G M D_LS / (c² D_L D_S)), D_LS = D_S − D_L (Einstein 1936; Schneider, Ehlers &
-/// Falco 1992; deflection sheet §4). Flat space: a cosmological lens needs angular-diameter
+/// Falco 1992). Flat space: a cosmological lens needs angular-diameter
 /// distances, with D_LS ≠ D_S − D_L.
 ///
 /// # Domain
@@ -173,7 +173,8 @@ impl PointLens {
 /// ```
 /// use chiwave_core::lensing::einstein_angle;
 /// use chiwave_core::units::{astro::KPC, iau2015::GM_SUN};
-/// // Deflection sheet §4 worked example: 0.3 M☉, 4 kpc, 8 kpc → 2.67920207569003e-9 rad.
+/// // θ_E = √(4GM D_LS/(c² D_L D_S)) evaluated by hand (IAU 2015 nominal GM☉, IAU 2012 au):
+/// // 0.3 M☉, 4 kpc, 8 kpc → 2.67920207569003e-9 rad.
 /// let t = einstein_angle(0.3 * GM_SUN, 4.0 * KPC, 8.0 * KPC).unwrap();
 /// assert!((t / 2.67920207569003e-9 - 1.0).abs() < 1e-12);
 /// ```
@@ -226,7 +227,7 @@ pub struct MagnificationCurve {
 /// ```
 /// use chiwave_core::lensing::magnification_curve;
 /// let c = magnification_curve(0.5, 1.0, 3).unwrap();
-/// // μ(1) = 3/√5 (Paczyński 1986; deflection sheet §4 formula at u = 1).
+/// // μ(1) = 3/√5 (Paczyński 1986 formula at u = 1).
 /// assert!((c.total[2] - 3.0 / 5f64.sqrt()).abs() < 1e-14);
 /// ```
 pub fn magnification_curve(offset_min: f64, offset_max: f64, n: usize) -> Result<MagnificationCurve, InputError> {

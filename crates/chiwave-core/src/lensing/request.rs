@@ -8,7 +8,6 @@ use crate::units::codata2018::C;
 use crate::units::iau2015::GM_SUN;
 use crate::units::{astro::AU, parse_frequency, parse_length, parse_mass, AngleUnit, Length, Mass, Quantity};
 use serde::{Deserialize, Serialize};
-use std::collections::BTreeMap;
 
 /// Point-lens request, as the page and `chiwave lens` send it.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
@@ -102,15 +101,7 @@ impl LensRequest {
         // Deflection at the Einstein ring, 4GM/(c² R_E): the thin-lens formulas are its first order.
         let alpha_e = 4.0 * gm / (C * C) / r_e;
         let mut flags = flags::point_lens(theta, alpha_e, z_l, lens.offset(), lens.total_magnification(), tol);
-        let mut sources = BTreeMap::new();
-        for k in ["einstein_radius_rad", "einstein_radius_mas", "einstein_radius_au", "einstein_radius_m"] {
-            sources.insert(k, sources::SRC_EINSTEIN);
-        }
-        sources.insert("images", sources::SRC_IMAGES);
-        sources.insert("total_magnification", sources::SRC_IMAGES);
-        sources.insert("time_delay_s", sources::SRC_DELAY);
-        sources.insert("time_delay_dimensionless", sources::SRC_DELAY);
-        sources.insert("mass_msun", "IAU 2015 Resolution B3 nominal (GM)☉ (Prša et al. 2016, arXiv:1605.09788)");
+        let (sources, citations) = sources::lens(frequency.is_some());
 
         let mut result = LensResult {
             best: crate::validity::Best::none("total_magnification", "not evaluated", tol),
@@ -139,6 +130,7 @@ impl LensRequest {
             estimates: crate::validity::Estimates::new(),
             flags: Vec::new(),
             sources,
+            citations,
         };
 
         let mut wave_part = None;
@@ -176,9 +168,6 @@ impl LensRequest {
                 wave::Method::Asymptotic => "asymptotic",
                 wave::Method::GeometricOptics => "geometric_optics",
             });
-            for k in ["w", "amplification", "amplification_abs", "amplification_phase_rad", "amplification_geometric"] {
-                result.sources.insert(k, sources::SRC_WAVE);
-            }
             wave_part = Some(accuracy::Wave { w, f: a.value, geometric: geo, method: a.method });
         }
         let (estimates, best) = accuracy::lens(lens.offset(), alpha_e, lens.total_magnification(), wave_part.as_ref(), tol);

@@ -3,7 +3,7 @@
 
 use crate::validity::{Best, Estimates, Flag};
 use serde::Serialize;
-use std::collections::BTreeMap;
+use crate::references::{CitationMap, SourceMap};
 
 /// One lensed image.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -83,6 +83,8 @@ pub struct LensResult {
     pub estimates: Estimates,
     /// Regime flags.
     pub flags: Vec<Flag>,
-    /// Output key → source of its formula.
-    pub sources: BTreeMap<&'static str, &'static str>,
+    /// Output key → source of its formula (a human string).
+    pub sources: SourceMap,
+    /// Output key → the same citations as registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
 }

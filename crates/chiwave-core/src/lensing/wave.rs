@@ -1,9 +1,10 @@
 //! Wave optics of a point-mass lens: the amplification factor F(w, y).
 //!
 //! Source: Takahashi & Nakamura 2003, ApJ 595, 1039, astro-ph/0305055 (earlier Peters 1974;
-//! Nakamura & Deguchi 1999); deflection sheet §4, marked VERIFIED there three ways.
+//! Nakamura & Deguchi 1999). tests/lensing_wave.rs checks it three ways (an independent
+//! evaluation of the diffraction integral, the y = 0 modulus, the geometric-optics limit).
 //!
-//! Conventions (sheet §4): waves ∝ e^{−iωt}; F = (w/(2πi)) ∫ d²x exp[i w T(x, y)] with
+//! Conventions (docs/physics/lensing.md §2): waves ∝ e^{−iωt}; F = (w/(2πi)) ∫ d²x exp[i w T(x, y)] with
 //! T = |x − y|²/2 − ln|x| − φ_m(y), so F = 1 without a lens and the minimum image carries phase 0.
 //! w = 4 G M_Lz ω / c³ = 8π G M_Lz f / c³ with the *redshifted* lens mass M_Lz = (1 + z_L) M;
 //! y = β/θ_E. Codes that use e^{+iωt} obtain the complex conjugate.
@@ -33,7 +34,7 @@ pub const EXACT_STEP_BUDGET: f64 = 60_000.0;
 ///
 /// # Formula
 /// w = 4 G M_Lz ω / c³ = 8π G M_Lz f / c³ with M_Lz = (1 + z_L) M (Takahashi & Nakamura 2003,
-/// astro-ph/0305055; deflection sheet §4). `gm_redshifted` is G M_Lz in m³ s⁻².
+/// astro-ph/0305055). `gm_redshifted` is G M_Lz in m³ s⁻².
 ///
 /// # Domain
 /// Both arguments finite and > 0; the result is finite unless their product overflows.
@@ -42,7 +43,8 @@ pub const EXACT_STEP_BUDGET: f64 = 60_000.0;
 /// ```
 /// use chiwave_core::lensing::wave::dimensionless_frequency;
 /// use chiwave_core::units::iau2015::GM_SUN;
-/// // For 1 M☉, w = 1 at f = c³/(8π G M) = 8078.1 Hz (deflection sheet §4).
+/// // For 1 M☉, w = 1 at f = c³/(8π G M) = 8078.1 Hz (evaluated by hand with IAU 2015
+/// // nominal GM☉).
 /// let w = dimensionless_frequency(GM_SUN, 8078.1);
 /// assert!((w - 1.0).abs() < 1e-5);
 /// ```
@@ -54,7 +56,7 @@ pub fn dimensionless_frequency(gm_redshifted: f64, frequency_hz: f64) -> f64 {
 /// Phase of the minimum image, φ_m(y) = (x_m − y)²/2 − ln x_m with x_m = (y + √(y² + 4))/2.
 ///
 /// # Formula
-/// Takahashi & Nakamura 2003, astro-ph/0305055; deflection sheet §4. x_m − y is computed as
+/// Takahashi & Nakamura 2003, astro-ph/0305055. x_m − y is computed as
 /// 2/(y + √(y² + 4)) to avoid cancellation at large y.
 ///
 /// # Examples
@@ -159,7 +161,7 @@ fn amplification_asymptotic(w: f64, y: f64) -> Result<Option<Complex64>, InputEr
 ///
 /// # Formula
 /// F(w, y) = exp[πw/4 + i(w/2)(ln(w/2) − 2φ_m(y))] Γ(1 − iw/2) ₁F₁(iw/2; 1; iwy²/2)
-/// (Takahashi & Nakamura 2003, astro-ph/0305055; deflection sheet §4, VERIFIED). The prefactor
+/// (Takahashi & Nakamura 2003, astro-ph/0305055). The prefactor
 /// and Γ are combined as one exponent through ln Γ, so nothing overflows at large w.
 ///
 /// # Domain
@@ -181,7 +183,7 @@ fn amplification_asymptotic(w: f64, y: f64) -> Result<Option<Complex64>, InputEr
 /// # Examples
 /// ```
 /// use chiwave_core::lensing::wave::amplification_factor;
-/// // Check value, deflection sheet §4: F(1, 0.3) = 1.67924419493817 − 0.564230508370834 i.
+/// // mpmath 1.3 (tests/reference/lensing_mpmath.py): F(1, 0.3) = 1.67924419493817 − 0.564230508370834 i.
 /// let (f, _) = amplification_factor(1.0, 0.3).unwrap();
 /// assert!((f.re - 1.67924419493817).abs() < 1e-12);
 /// assert!((f.im + 0.564230508370834).abs() < 1e-12);
@@ -224,7 +226,7 @@ pub fn amplification_factor(w: f64, y: f64) -> Result<(Complex64, Method), Input
 ///
 /// # Formula
 /// F_geo = √|μ₊| − i √|μ₋| e^{iwΔT(y)}, ΔT = y√(y² + 4)/2 + 2 asinh(y/2) (the image time delay in
-/// units of 4GM_Lz/c³) (Takahashi & Nakamura 2003, astro-ph/0305055; deflection sheet §4). The −i
+/// units of 4GM_Lz/c³) (Takahashi & Nakamura 2003, astro-ph/0305055). The −i
 /// is the Morse phase of the saddle image.
 ///
 /// # Domain
@@ -236,7 +238,7 @@ pub fn amplification_factor(w: f64, y: f64) -> Result<(Complex64, Method), Input
 /// # Examples
 /// ```
 /// use chiwave_core::lensing::wave::amplification_geometric;
-/// // At w = 0, F_geo = √|μ+| − i√|μ−|; μ± at y = 0.5 from the deflection sheet §4:
+/// // At w = 0, F_geo = √|μ+| − i√|μ−|; μ± at y = 0.5 from Paczyński 1986 (evaluated by hand):
 /// // 1.5914103126635 and −0.591410312663498.
 /// let f = amplification_geometric(0.0, 0.5).unwrap();
 /// assert!((f.re - 1.5914103126635f64.sqrt()).abs() < 1e-12);
@@ -325,7 +327,8 @@ pub struct AmplificationCurve {
 /// ```
 /// use chiwave_core::lensing::wave::amplification_curve;
 /// let c = amplification_curve(0.0, 0.01, 100.0, 5).unwrap();
-/// // At y = 0, |F|² = πw/(1 − e^{−πw}) (deflection sheet §4); at w = 100 that is 100π.
+/// // At y = 0, |F|² = πw/(1 − e^{−πw}) (Takahashi & Nakamura 2003, y = 0 limit); at w = 100
+/// // that is 100π.
 /// assert!((c.abs[4].powi(2) / (100.0 * std::f64::consts::PI) - 1.0).abs() < 1e-10);
 /// ```
 pub fn amplification_curve(y: f64, w_min: f64, w_max: f64, n: usize) -> Result<AmplificationCurve, InputError> {

@@ -79,6 +79,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
             e_rad_body2_j: e2 * mc2,
         }
     });
+    let (sources, citations) = sources::electromagnetic();
     Ok(EmWaveformResult {
         force: WaveformForce::Em,
         best,
@@ -108,7 +109,8 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<EmWavefor
         impulse: sys.impulse(),
         units: EM_UNITS,
         flags,
-        sources: sources::electromagnetic(),
+        sources,
+        citations,
         spectrum,
         physical,
         estimates,

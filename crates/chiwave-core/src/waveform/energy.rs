@@ -1,10 +1,11 @@
 //! Radiated energy-momentum: the flux integral of the waveform over u and the sphere (progressive,
 //! so a page can advance it in chunks), beside the closed form of Herrmann et al. 2021, and sky maps.
 //!
-//! Sources: flux normalisation dE/(du dΩ) = D²(ḣ₊² + ḣ×²)/(16π G) (waveform sheet §0, pitfall §8);
+//! Sources: flux normalisation dE/(du dΩ) = D²(ḣ₊² + ḣ×²)/(16π G) (e.g. Maggiore 2008, *Gravitational
+//! Waves* vol. 1, ch. 1; with h_ij h_ij the factor is 1/(32πG); docs/physics/waveform.md §1);
 //! P_rad^μ = (G³ m1² m2²/b³)(u1 + u2)^μ E(γ)/(γ + 1) (Herrmann, Parra-Martinez, Ruf & Zeng 2021,
-//! arXiv:2101.07255, PRL 126, 201602; recalled in sheet §4, equation number not given; the sheet's
-//! §7 reproduced it with this flux integral to 1e-14).
+//! arXiv:2101.07255, PRL 126, 201602; the formula as recalled, equation number not given; this flux integral
+//! reproduces it to 1e-14, docs/physics/waveform.md §4).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]
@@ -16,7 +17,7 @@ use crate::error::InputError;
 use crate::numeric::gauss_legendre;
 use serde::Serialize;
 
-/// Closed-form radiated 4-momentum in a frame (Herrmann et al. 2021; sheet §4), G = 1.
+/// Closed-form radiated 4-momentum in a frame (Herrmann et al. 2021, arXiv:2101.07255), G = 1.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct RadiatedClosed {
     /// Radiated energy P⁰ (same units as the masses).
@@ -30,7 +31,7 @@ pub struct RadiatedClosed {
 /// The closed-form radiated 4-momentum in `frame`:
 ///
 /// # Formula
-/// P^μ = (m1² m2²/b³)(u1 + u2)^μ E(γ)/(γ + 1) (Herrmann et al. 2021, arXiv:2101.07255; sheet §4).
+/// P^μ = (m1² m2²/b³)(u1 + u2)^μ E(γ)/(γ + 1) (Herrmann et al. 2021, arXiv:2101.07255).
 /// In frame A: P⁰ = m1² m2² E/b³, P^x = P⁰(γ − 1)/(γ v). In the CM frame: P⁰ = m1² m2² E/(b³ Γ).
 ///
 /// # Examples
@@ -166,10 +167,10 @@ pub struct SkyProgress {
 /// The flux integral over u and the sphere, advanced in chunks so that a page never freezes.
 ///
 /// # Formula
-/// P^μ = (1/16π) ∫ dΩ ∫ du D²(ḣ₊² + ḣ×²)(1, n) (sheet §4). The sphere is parametrised about the
+/// P^μ = (1/16π) ∫ dΩ ∫ du D²(ḣ₊² + ḣ×²)(1, n) (docs/physics/waveform.md §4). The sphere is parametrised about the
 /// direction of motion (polar axis +x); each hemisphere uses the aberration map
 /// c = (c' + w)/(1 + w c') with w the speed of the body moving toward it (frame A: v and 0; CM:
-/// v1 and v2), so the nodes cluster into the beams at high γ (sheet §8); Gauss–Legendre in c',
+/// v1 and v2), so the nodes cluster into the beams at high γ (docs/physics/waveform.md §4); Gauss–Legendre in c',
 /// trapezoid in the azimuth, the z → −z symmetry of the orbit used.
 ///
 /// # Examples
@@ -419,7 +420,7 @@ mod tests {
     #[allow(clippy::excessive_precision)] // values transcribed from mpmath as printed
     fn e_function_against_mpmath() {
         // The shared E(γ) (crate::encounter::radiated, which replaced this module's private copy)
-        // against mpmath 1.3, mp.dps = 40, tests/reference/waveform_herrmann.py (sheet §4 form).
+        // against mpmath 1.3, mp.dps = 40, tests/reference/waveform_herrmann.py.
         // The former private copy lost up to 7e-12 near v = 0.15 (its 1/p³ cancellation); the
         // shared function keeps 1e-13 across its series switch.
         let cases = [
@@ -437,7 +438,7 @@ mod tests {
             let (g, e) = (c[0], c[1]);
             assert!(rel_diff(e_function(g), e) < 1e-13, "γ={g}: {} vs {e}", e_function(g));
         }
-        // Low-velocity limit E/π → (37/15) v (Newtonian straight line, sheet §4).
+        // Low-velocity limit E/π → (37/15) v (Newtonian straight line, docs/physics/waveform.md §4).
         let g = 1.0 + 1e-10;
         let v = ((g - 1.0) * (g + 1.0f64)).sqrt() / g;
         assert!(rel_diff(e_function(g), std::f64::consts::PI * 37.0 / 15.0 * v) < 1e-9);

@@ -1,7 +1,8 @@
 //! The two-body system, the two frames, observer directions and the boost map between frames.
 //!
-//! Sources: waveform reference sheet §0 (frames, polarisation basis, the Doppler factor δ and the
-//! polarisation rotation ψ from the Lorentz invariance of h_{μν} m^μ m^ν, origin shift rule of §8);
+//! Sources: the frames, the polarisation basis, the Doppler factor δ, the polarisation rotation ψ
+//! (from the Lorentz invariance of h_{μν} m^μ m^ν) and the origin-shift rule are chiwave's
+//! conventions, written out in docs/physics/waveform.md §1;
 //! the boost, aberration and Doppler factor are the textbook Lorentz kinematics (Rybicki &
 //! Lightman 1979, Radiative Processes in Astrophysics, ch. 4).
 
@@ -11,7 +12,7 @@
 use crate::error::{finite, positive, InputError};
 use serde::{Deserialize, Serialize};
 
-/// Which frame the waveform is given in (sheet §0).
+/// Which frame the waveform is given in (docs/physics/waveform.md §1).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "lowercase")]
 pub enum Frame {
@@ -118,20 +119,20 @@ impl Binary {
         (1.0 + 2.0 * self.nu() * (self.gamma - 1.0)).sqrt()
     }
 
-    /// Magnitude of the LO impulse Q = 2 m1 m2 (2γ² − 1)/(b sqrt(γ² − 1)) (Westpfahl 1985; sheet §1(a)).
+    /// Magnitude of the LO impulse Q = 2 m1 m2 (2γ² − 1)/(b sqrt(γ² − 1)) (Westpfahl 1985, Fortschr. Phys. 33, 417).
     pub fn impulse(&self) -> f64 {
         let g = self.gamma;
         2.0 * self.m1 * self.m2 * (2.0 * g * g - 1.0) / (self.b * ((g - 1.0) * (g + 1.0)).sqrt())
     }
 
-    /// Velocity V of the CM frame relative to frame A: V = m1 γ v/(m1 γ + m2) (sheet §0).
+    /// Velocity V of the CM frame relative to frame A: V = m1 γ v/(m1 γ + m2) (docs/physics/waveform.md §1).
     pub fn cm_velocity(&self) -> f64 {
         self.m1 * self.gamma * self.v() / (self.m1 * self.gamma + self.m2)
     }
 
     /// The bodies' states in `frame` before the encounter: `[(E_a, v_a along x, y_a)]` for a = 1, 2.
-    /// E_a = m_a γ_a; y_a is the line the body moves on (sheet §0: in the CM frame
-    /// y1 = E2 b/E, y2 = −E1 b/E).
+    /// E_a = m_a γ_a; y_a is the line the body moves on (docs/physics/waveform.md §1: in
+    /// the CM frame y1 = E2 b/E, y2 = −E1 b/E).
     pub fn bodies(&self, frame: Frame) -> [(f64, f64, f64); 2] {
         match frame {
             Frame::Rest2 => [(self.m1 * self.gamma, self.v(), self.b), (self.m2, 0.0, 0.0)],
@@ -150,7 +151,7 @@ impl Binary {
     }
 }
 
-/// Unit direction and polarisation basis for polar angles (θ, φ), polar axis +z (sheet §0).
+/// Unit direction and polarisation basis for polar angles (θ, φ), polar axis +z (docs/physics/waveform.md §1).
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub(crate) struct Basis {
     pub n: [f64; 3],
@@ -189,7 +190,7 @@ impl Basis {
 ///
 /// For a direction n' in the moving frame: (1, n) ∝ L⁻¹(1, n'), δ = [L⁻¹(1, n')]⁰⁻¹ so that
 /// δ(1, n') = L(1, n); u_A = δ (u' − n'_y a_y); D'(h'₊ + i h'×) = δ e^{2iψ} D(h₊ + i h×)
-/// (sheet §0, origin rule of §8). ψ is found numerically by boosting m = e_θ + i e_φ of frame A.
+/// (docs/physics/waveform.md §1). ψ is found numerically by boosting m = e_θ + i e_φ of frame A.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub(crate) struct BoostMap {
     /// Direction in frame A (polar angles).

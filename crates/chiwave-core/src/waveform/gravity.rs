@@ -150,6 +150,7 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
     let (estimates, best, best_e_rad) =
         accuracy::gravity(chi1, peak_abs_h, closed.energy, e_flux, &slow, quadrupole.as_ref().map(|_| (v, cm_equal)), c.tolerance);
     let flags = flags::gravity(&sys, b_over_m, req.energy_flux, chi1, &estimates["peak_abs_h"]);
+    let (sources, citations) = sources::gravity();
     Ok(GravityWaveformResult {
         best,
         best_e_rad,
@@ -174,7 +175,8 @@ pub(crate) fn evaluate(req: &WaveformRequest, c: &Validated) -> Result<GravityWa
         b_over_gm: b_over_m,
         b_over_m_alias: b_over_m,
         flags,
-        sources: sources::gravity(),
+        sources,
+        citations,
         physical,
         spectrum,
         detector,

@@ -1,9 +1,11 @@
 //! The LO strain for one observer direction: worldline part in closed form, field-stress part as a
 //! Gauss–Legendre sum over the Feynman parameter, and the map to a boosted frame.
 //!
-//! Source: waveform reference sheet §1 (DERIVED there from the Landau–Lifshitz relaxed Einstein
-//! equations in harmonic gauge; Landau & Lifshitz, *Classical Theory of Fields*, §96; Poisson &
-//! Will, *Gravity* (2014), ch. 6), checked by the sheet's §7 and by this crate's tests.
+//! Source: chiwave's derivation from the relaxed Einstein equations in harmonic gauge with the
+//! Landau–Lifshitz pseudotensor (Landau & Lifshitz, *Classical Theory of Fields*, §96; Poisson &
+//! Will, *Gravity* (2014), ch. 6), written out in docs/physics/waveform.md §2 and checked by this
+//! crate's tests (energy balance against Herrmann et al. 2021, arXiv:2101.07255; Lorentz
+//! covariance; the memory of Braginsky & Thorne 1987; the quadrupole limit).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]
@@ -12,8 +14,8 @@ use super::frames::{Basis, Binary, BoostMap, Frame};
 use crate::error::{finite, InputError};
 use crate::numeric::gauss_legendre;
 
-/// Default number of Gauss–Legendre nodes in the Feynman parameter x (sheet §1: 24–48 nodes give
-/// about 1e-13 at moderate γ; more are used automatically at high γ, see [`x_nodes_for`]).
+/// Default number of Gauss–Legendre nodes in the Feynman parameter x (24–48 nodes give about 1e-13
+/// at moderate γ, tests/waveform.rs; more are used automatically at high γ, see [`x_nodes_for`]).
 pub const DEFAULT_X_NODES: usize = 40;
 
 /// Nodes used for the Feynman-parameter integral at Lorentz factor γ when `requested` is the base
@@ -44,7 +46,7 @@ pub(crate) struct FieldNode {
     pub s0: f64,
 }
 
-/// Frame-A kernel for one direction (sheet §1).
+/// Frame-A kernel for one direction (docs/physics/waveform.md §2).
 #[derive(Debug, Clone)]
 pub(crate) struct RestKernel {
     pub v: f64,
@@ -63,7 +65,7 @@ const ETA: [f64; 4] = [-1.0, 1.0, 1.0, 1.0];
 
 /// Spatial block of the bilinear Landau–Lifshitz + harmonic-gauge expression E^{ab}(A, B), with the
 /// derivative on the first factor replaced by `k` (lower index) and on the second by `p`, amplitudes
-/// `a`, `b` (upper indices), indices moved with η (sheet §1(b), the explicit LL expression).
+/// `a`, `b` (upper indices), indices moved with η (the explicit Landau–Lifshitz expression, docs/physics/waveform.md §2).
 fn ll_bilinear(a: &M4, k: &[f64; 4], b: &M4, p: &[f64; 4]) -> [[f64; 3]; 3] {
     let up = |w: &[f64; 4]| [ETA[0] * w[0], w[1], w[2], w[3]];
     let (ku, pu) = (up(k), up(p));
@@ -119,7 +121,7 @@ fn ll_bilinear(a: &M4, k: &[f64; 4], b: &M4, p: &[f64; 4]) -> [[f64; 3]; 3] {
     e
 }
 
-/// The field-stress quadratic form C_pol(q) = P_jk C^{jk}(q) for both polarisations (sheet §1(b)):
+/// The field-stress quadratic form C_pol(q) = P_jk C^{jk}(q) for both polarisations (docs/physics/waveform.md §2):
 /// C^{jk} is the cross-term (h1, h2) part, both orders, of 16πG(−g)(t_LL + t_H)^{jk} with
 /// d → iK, times −1; wave vectors K1 = (−q·v, q) on h1 and K2 = (0, (q·v) n − q) on h2,
 /// unit amplitudes u1 u1 and δ0 δ0.
@@ -204,7 +206,7 @@ impl RestKernel {
         let (m1, m2, b) = (sys.m1, sys.m2, sys.b);
         let pol = basis.pol_tensors();
         let one_m_nxv = 1.0 - n[0] * v;
-        // Worldline part (sheet §1(a)), contracted with the polarisation tensors.
+        // Worldline part (docs/physics/waveform.md §2), contracted with the polarisation tensors.
         let kk = m1 * g / one_m_nxv;
         let mut c_r = [0.0; 2];
         let mut c_y = [0.0; 2];
@@ -214,7 +216,7 @@ impl RestKernel {
             c_r[p] = 4.0 * kk * m2 * pxx * (4.0 * v * v + v * n[0] * s / one_m_nxv + 2.0 * s);
             c_y[p] = -4.0 * kk * (m2 * (1.0 + v * v) / (b * v)) * (v * v * pxx * n[1] / one_m_nxv + 2.0 * v * pxy);
         }
-        // Field part (sheet §1(b)).
+        // Field part (docs/physics/waveform.md §2).
         let np = n_pol(v, g, n, &pol);
         let vv = [v, 0.0, 0.0];
         let mut a1 = [[0.0; 3]; 3];
@@ -226,12 +228,11 @@ impl RestKernel {
                 a2[i][j] = id - vv[i] * n[j] - n[i] * vv[j] + vv[i] * vv[j];
             }
         }
-        // Overall sign: the sheet writes D h_F = +4G(2Gm1m2/γ) N ∫…, with C the quadratic form of
-        // *minus* the cross terms with d → iK. Read literally (i·i = −1 on each bilinear term) that
-        // makes C = +E(d → K), where E is the bilinear LL + harmonic expression. The energy balance
-        // against Herrmann et al. (this module's tests, 1e-10 at several γ) fixes the relative sign
-        // of the field part to the opposite one, so the prefactor below carries −1: the Fourier sign
-        // conventions of the two linear fields in the sheet are opposite (e^{+iK·x} vs e^{−iq·X}).
+        // Overall sign (docs/physics/waveform.md §2): the field part is written as +4G(2Gm1m2/γ) N ∫…
+        // with C the quadratic form of *minus* the cross terms with d → iK, i.e. C = +E(d → K), E the
+        // bilinear LL + harmonic expression. The two linear fields carry opposite Fourier signs
+        // (e^{+iK·x} vs e^{−iq·X}), so the prefactor below carries −1; the energy balance against
+        // Herrmann et al. 2021 (this module's tests, 1e-10 at several γ) confirms the sign.
         let pref = -4.0 * 2.0 * m1 * m2 / g;
         let (xs, ws) = gauss_legendre(x_nodes_for(g, x_nodes.max(4)));
         let mut nodes = Vec::with_capacity(xs.len());
@@ -359,9 +360,9 @@ impl RestKernel {
 /// The waveform seen in one direction of one frame, ready to evaluate at any u.
 ///
 /// # Formula
-/// Frame A: D h = worldline part + field-stress part (sheet §1). Other frames: the frame-A
+/// Frame A: D h = worldline part + field-stress part (docs/physics/waveform.md §2). Other frames: the frame-A
 /// waveform at the aberrated direction, D'(h'₊ + i h'×)(u') = δ e^{2iψ} D(h₊ + i h×)(δ(u' − n'·a))
-/// (sheet §0, §8).
+/// (docs/physics/waveform.md §1).
 ///
 /// # Examples
 /// ```
@@ -461,7 +462,7 @@ impl DirectionWaveform {
     }
 
     /// Late-minus-early strain from the waveform's own asymptotics (worldline part at u → ±∞;
-    /// the field part vanishes there, sheet §1).
+    /// the field part vanishes there, docs/physics/waveform.md §2).
     pub fn memory(&self) -> [f64; 2] {
         // h_wl(+∞) − h_wl(−∞) = 2 c_y (1/r → 0, 1 + vt/r → 2 or 0).
         self.map.rotate([2.0 * self.kernel.c_y[0], 2.0 * self.kernel.c_y[1]], self.map.delta)
@@ -482,7 +483,7 @@ impl DirectionWaveform {
 /// D·(h₊, h×)(u) at the given retarded times (O(G²) part) in `frame` at direction (θ, φ).
 ///
 /// # Formula
-/// See [`DirectionWaveform`]; sheet §1.
+/// See [`DirectionWaveform`]; docs/physics/waveform.md §2.
 ///
 /// # Errors
 /// [`InputError`] naming `theta`, `phi` or `u` (every u must be finite).
@@ -511,7 +512,9 @@ pub fn waveform(sys: &Binary, frame: Frame, theta: f64, phi: f64, u: &[f64]) -> 
 
 /// The u-independent O(G) piece D·(h₊, h×) of the incoming bodies' fields in `frame`:
 /// D h_ij = 4 Σ_a E_a [v_a v_a/(1 − n·v_a)]_ij contracted with the polarisation tensors
-/// (sheet §0). It is not Lorentz-covariant under the polarisation map (sheet §0, §8).
+/// (docs/physics/waveform.md §1). It is not Lorentz-covariant under the polarisation map (it is
+/// not transverse-traceless in the four-dimensional sense), so frames compare derivatives or
+/// differences only.
 ///
 /// # Errors
 /// [`InputError`] naming `theta` or `phi`.

@@ -1,9 +1,10 @@
 //! Gravitational-wave memory (Braginsky–Thorne) and the zero-frequency-limit closed form.
 //!
 //! Sources: Braginsky & Thorne 1987, Nature 327, 123 (equation number not given), linearised in
-//! the LO impulse (waveform sheet §3); Smarr 1977, PRD 15, 2069 (ZFL); closed form of Di Vecchia,
-//! Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (recalled in sheet §3; the prefactor
-//! 2GQ²/π is the one the sheet's numerical check fixed — recalled as GQ²/π).
+//! the LO impulse (Westpfahl 1985; docs/physics/waveform.md §3); Smarr 1977, PRD 15, 2069 (ZFL); closed form of Di Vecchia,
+//! Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (recalled from memory; the prefactor
+//! 2GQ²/π is the one the numerical zero-frequency limit of the waveform fixes — it was recalled
+//! as GQ²/π; docs/physics/waveform.md §3).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]
@@ -15,7 +16,8 @@ use crate::error::InputError;
 ///
 /// # Formula
 /// D Δh_ij^TT = 4 Δ[Σ_a p_a^i p_a^j/(E_a − n·p_a)]^TT with Δp_1 = −Q ŷ, Δp_2 = +Q ŷ,
-/// Q = 2 m1 m2 (2γ² − 1)/(b √(γ² − 1)) and ΔE_a = p_a·Δp_a/E_a = 0 (sheet §3, G = 1), linearised:
+/// Q = 2 m1 m2 (2γ² − 1)/(b √(γ² − 1)) and ΔE_a = p_a·Δp_a/E_a = 0 (Westpfahl 1985 LO impulse, G = 1),
+/// linearised:
 /// Δ[p p/(E − n·p)] = (p Δp + Δp p)/(E − n·p) + p p (n·Δp)/(E − n·p)².
 /// In frame A only body 1 contributes.
 ///
@@ -54,9 +56,10 @@ pub fn memory_braginsky_thorne(sys: &Binary, frame: Frame, theta: f64, phi: f64)
 ///
 /// # Formula
 /// dE/dω(0) = (2Q²/π)[(8 − 5γ²)/(3(γ² − 1)) + γ(2γ² − 3) arccosh γ/(γ² − 1)^{3/2}],
-/// Q = |Δp| (Di Vecchia, Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772, recalled in
-/// sheet §3 with the prefactor fixed by the sheet's check against the Smarr ZFL; compare the
-/// normalisation with the paper before citing it as the paper's formula). Frame-invariant.
+/// Q = |Δp| (Di Vecchia, Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772, recalled from
+/// memory, with the prefactor fixed by the numerical zero-frequency limit of the waveform,
+/// docs/physics/waveform.md §3; compare the normalisation with the paper before citing it as the
+/// paper's formula). Frame-invariant.
 ///
 /// # Domain
 /// γ > 1. Near γ → 1 the two terms cancel (each ~1/(γ² − 1)); the result keeps about

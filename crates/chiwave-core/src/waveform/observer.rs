@@ -1,7 +1,8 @@
 //! Observer scales in physical units and the interferometer antenna pattern.
 //!
-//! Sources: waveform sheet §6 (strain unit G² m1 m2/(c⁴ D b), time unit b/c, characteristic
-//! frequency v/(2π b) for v ≪ c — a rule of thumb, not fitted); constants from [`crate::units`]
+//! Sources: dimensional analysis of the LO strain (strain unit G² m1 m2/(c⁴ D b), time unit b/c;
+//! docs/physics/waveform.md §7) and the characteristic frequency v/(2π b) for v ≪ c (a rule of
+//! thumb, common practice, not fitted); constants from [`crate::units`]
 //! (CODATA 2018 G, IAU 2015 nominal GM☉, exact c and au). Antenna pattern of an L-shaped
 //! interferometer with arms along x and y: Thorne 1987, in *300 Years of Gravitation* (Hawking &
 //! Israel eds.), ch. 9 (common practice; equation number not given).
@@ -17,9 +18,9 @@ pub struct PhysicalScales {
     pub mass_time_s: f64,
     /// b/c in seconds.
     pub b_over_c_s: f64,
-    /// G² m1 m2/(c⁴ D b): the strain scale (sheet §6), when a distance is given.
+    /// G² m1 m2/(c⁴ D b): the strain scale (docs/physics/waveform.md §7), when a distance is given.
     pub strain_unit: Option<f64>,
-    /// v/(2π b) in Hz (sheet §6, v ≪ c rule of thumb).
+    /// v/(2π b) in Hz (v ≪ c rule of thumb, common practice).
     pub f_char_hz: f64,
 }
 
@@ -40,12 +41,12 @@ impl PhysicalScales {
 /// The strain unit G² m1 m2/(c⁴ D b) from the mass lengths G m_a/c² (metres), b and D (metres).
 ///
 /// # Formula
-/// h ≈ H × G² m1 m2/(c⁴ D b), H the dimensionless output (sheet §6).
+/// h ≈ H × G² m1 m2/(c⁴ D b), H the dimensionless output (docs/physics/waveform.md §7).
 ///
 /// # Examples
 /// ```
 /// use chiwave_core::units::{astro::{AU, MPC}, SUN_LENGTH_M};
-/// // Sheet §6 worked example: 10 M☉ + 10 M☉, b = 1 au, D = 1 Mpc → 4.72e-26.
+/// // G² m1 m2/(c⁴ D b) by hand (CODATA 2018 G, IAU 2015 GM☉): 10 M☉ + 10 M☉, b = 1 au, D = 1 Mpc → 4.72e-26.
 /// let h = chiwave_core::waveform::strain_unit(10.0 * SUN_LENGTH_M, 10.0 * SUN_LENGTH_M, AU, MPC);
 /// assert!((h / 4.72e-26 - 1.0).abs() < 2e-3);
 /// ```
@@ -54,7 +55,7 @@ pub fn strain_unit(l1_m: f64, l2_m: f64, b_m: f64, d_m: f64) -> f64 {
 }
 
 /// Characteristic frequency f ~ v/(2π b) in Hz for relative speed v (fraction of c) and b in
-/// metres (sheet §6; valid for v ≪ c, not fitted numerically; the forward direction is
+/// metres (common practice; valid for v ≪ c, not fitted numerically; the forward direction is
 /// Doppler-raised by about γ/(1 − v cos θ)).
 pub fn characteristic_frequency(v: f64, b_m: f64) -> f64 {
     v * C / (2.0 * std::f64::consts::PI * b_m)

@@ -1,8 +1,8 @@
 //! Slow-motion comparison: the quadrupole-formula waveform of the exact Newtonian hyperbola.
 //!
 //! Sources: quadrupole formula h_ij = (2G/D) d²Q_ij/dt² = (4Gμ/D)(v_i v_j − G M x_i x_j/r³)
-//! (Einstein 1918; e.g. Maggiore, *Gravitational Waves* vol. 1 (2008), §3.3; waveform sheet §5);
-//! Kepler hyperbola in the eccentric-anomaly parametrisation (sheet §5; e.g. Landau & Lifshitz,
+//! (Einstein 1918; e.g. Maggiore, *Gravitational Waves* vol. 1 (2008), §3.3);
+//! Kepler hyperbola in the eccentric-anomaly parametrisation (docs/physics/waveform.md §6; e.g. Landau & Lifshitz,
 //! *Mechanics*, §15).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
@@ -13,7 +13,7 @@ use super::kernel::Strain;
 use crate::error::{finite, InputError};
 
 /// Relative orbit of the Newtonian hyperbola at time t (periapsis at t = 0): (x, y, vx, vy),
-/// oriented so the incoming asymptote is along +x at y = +b (sheet §5).
+/// oriented so the incoming asymptote is along +x at y = +b (docs/physics/waveform.md §6).
 pub(crate) fn hyperbola_state(m: f64, v_inf: f64, b: f64, t: f64) -> [f64; 4] {
     let a = m / (v_inf * v_inf);
     let e = (1.0 + (b * v_inf * v_inf / m).powi(2)).sqrt();
@@ -46,13 +46,13 @@ pub(crate) fn hyperbola_state(m: f64, v_inf: f64, b: f64, t: f64) -> [f64; 4] {
 
 /// Quadrupole-formula D·(h₊, h×)(u) of the exact Newtonian hyperbola with the same masses, the
 /// relative speed at infinity v = √(γ² − 1)/γ and impact parameter b, minus its u-independent
-/// O(G) part 4μ v∞v∞ (so it compares with the O(G²) PM strain, sheet §5).
+/// O(G) part 4μ v∞v∞ (so it compares with the O(G²) PM strain, docs/physics/waveform.md §6).
 ///
 /// # Formula
-/// D h_ij = 4μ (v_i v_j − M x_i x_j/r³) − 4μ v∞_i v∞_j, μ = m1 m2/M (sheet §5). The time is the
-/// CM time (u = t − D); in frame A the curve is shifted by the origin rule (sheet §8),
+/// D h_ij = 4μ (v_i v_j − M x_i x_j/r³) − 4μ v∞_i v∞_j, μ = m1 m2/M (Einstein 1918). The time is the
+/// CM time (u = t − D); in frame A the curve is shifted by the origin rule (docs/physics/waveform.md §1),
 /// u_A = u_cm − n_y E1 b/E, so it can be drawn beside the frame-A PM waveform (there the two agree
-/// only to O(v), sheet §5; in the CM frame with equal masses to O(v²)).
+/// only to O(v), docs/physics/waveform.md §6; in the CM frame with equal masses to O(v²)).
 ///
 /// # Errors
 /// [`InputError`] naming `theta`, `phi` or `u`.
@@ -163,7 +163,7 @@ mod tests {
         let s = hyperbola_state(m, v, b, -1e9);
         assert!((s[2] - v).abs() < 1e-5 * v && s[3].abs() < 1e-5 * v, "{s:?}");
         // Angular momentum per unit mass x vy − y vx = −b v∞ at all times (exact conservation;
-        // L_z < 0 for b along +y, sheet §0).
+        // L_z < 0 for b along +y, docs/physics/waveform.md §1).
         for t in [-1e9, -3e3, 0.0, 7e4] {
             let s = hyperbola_state(m, v, b, t);
             let l = s[0] * s[3] - s[1] * s[2];

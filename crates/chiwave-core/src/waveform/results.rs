@@ -15,7 +15,7 @@ use super::observer::PhysicalScales;
 use super::request::WaveformForce;
 use crate::validity::{Best, Estimates, Flag};
 use serde::Serialize;
-use std::collections::BTreeMap;
+use crate::references::{CitationMap, SourceMap};
 
 /// Plus and cross components of one quantity.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -152,7 +152,9 @@ pub struct GravityWaveformResult {
     pub b_over_m_alias: f64,
     pub flags: Vec<Flag>,
     /// What a source covers → its citation (keys listed in `sources.rs`).
-    pub sources: BTreeMap<&'static str, &'static str>,
+    pub sources: SourceMap,
+    /// The same keys → registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
     pub physical: Option<GravityWaveformPhysical>,
     pub spectrum: Option<SpectrumResult>,
     pub detector: Option<DetectorResult>,
@@ -264,7 +266,9 @@ pub struct EmWaveformResult {
     pub units: &'static str,
     pub flags: Vec<Flag>,
     /// What a source covers → its citation (keys listed in `sources.rs`).
-    pub sources: BTreeMap<&'static str, &'static str>,
+    pub sources: SourceMap,
+    /// The same keys → registry ids with their place ([`crate::references`]).
+    pub citations: CitationMap,
     pub spectrum: Option<EmSpectrumResult>,
     pub physical: Option<EmWaveformPhysical>,
     /// Error estimates of `peak_abs_e`, `e_rad_flux`, `e_rad_closed`, keyed by their JSON key.

@@ -3,16 +3,17 @@
 //! # Method
 //! ḣ̃(ω) = ∫ du e^{iωu} ḣ(u). The worldline part transforms in closed form with
 //! ∫ e^{iWt} dt/r = (2/v) K0(Wb/v) and ∫ e^{iWt} b² dt/r³ = 2 (Wb/v) K1(Wb/v)/v, W = ω(1 − n_x v)
-//! (waveform sheet §1, "Frequency domain"). For the field-stress part each Feynman-parameter slice
-//! has S² quadratic in u, so it transforms to K0, K1 with a phase e^{−iωβ/α} (the structure the
-//! sheet describes; the sheet did **not** implement this analytic version — here it is checked
+//! (Gradshteyn & Ryzhik 3.754.2; docs/physics/waveform.md §2). For the field-stress part each Feynman-parameter slice
+//! has S² quadratic in u, so it transforms to K0, K1 with a phase e^{−iωβ/α} (the Bessel-function
+//! structure Mougiakakos, Riva & Vernizzi 2021, arXiv:2102.08339, describe; chiwave's own
+//! evaluation, checked
 //! against the time domain by Parseval's theorem and against the memory at ω → 0, see tests).
-//! dE/(dω dΩ) = D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (sheet §1). In a boosted frame,
+//! dE/(dω dΩ) = D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (Parseval with the flux of docs/physics/waveform.md §1). In a boosted frame,
 //! dE'/(dω' dΩ') = δ² |ḣ̃_A(ω'/δ)|²/(16π²).
 //!
 //! Sources: the two Fourier integrals are Gradshteyn & Ryzhik 3.754.2 and its b-derivative
 //! (recalled); the ω → 0 limit is Smarr 1977 (PRD 15, 2069); the angle-integrated ZFL closed form
-//! is Di Vecchia, Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (waveform sheet §3).
+//! is Di Vecchia, Heissenberg, Russo & Veneziano 2021, arXiv:2101.05772 (docs/physics/waveform.md §3).
 
 // Index loops are kept where the indices are tensor indices (clearer than iterator chains).
 #![allow(clippy::needless_range_loop)]
@@ -80,7 +81,7 @@ impl DirectionWaveform {
     /// At ω = 0 it is the zero-frequency limit |D Δh|²/(16π²) from the memory (Smarr 1977).
     ///
     /// # Formula
-    /// D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (sheet §1); δ²|ḣ̃_A(ω/δ)|²/(16π²) in a boosted frame.
+    /// D²(|ḣ̃₊|² + |ḣ̃×|²)/(16π²) (docs/physics/waveform.md §1); δ²|ḣ̃_A(ω/δ)|²/(16π²) in a boosted frame.
     pub fn spectrum(&self, omega: f64) -> f64 {
         let pi2 = std::f64::consts::PI * std::f64::consts::PI;
         if omega.is_nan() || omega <= 0.0 {
@@ -112,7 +113,7 @@ pub fn spectrum_angle_integrated(
 /// between frames); the same sum as [`spectrum_angle_integrated`].
 ///
 /// # Formula
-/// dE/dω = Σ_cells w_cell dE/(dω dΩ)(n_cell) on the sky rule of [`SkyIntegrator`] (sheet §1).
+/// dE/dω = Σ_cells w_cell dE/(dω dΩ)(n_cell) on the sky rule of [`SkyIntegrator`].
 ///
 /// # Examples
 /// ```
@@ -219,7 +220,7 @@ impl SkySpectrum {
 }
 
 /// The zero-frequency limit dE/dω(0) over the sphere from the Braginsky–Thorne memory
-/// (Smarr 1977 ZFL, sheet §3): ∫ dΩ |D Δh|²/(16π²), on the sky cells of `opts`.
+/// (Smarr 1977 ZFL, docs/physics/waveform.md §3): ∫ dΩ |D Δh|²/(16π²), on the sky cells of `opts`.
 ///
 /// # Errors
 /// [`InputError`] naming a sky option.
