@@ -402,6 +402,12 @@ fn covered(g: &Geometry, b: &Bounds) -> usize {
     n
 }
 
+/// How much drawn data a box at `b` covers in the layout `lay` (for the tests).
+#[cfg(test)]
+pub(crate) fn covered_by(fig: &Figure, lay: &Layout, b: &Bounds) -> usize {
+    covered(&geometry(fig, lay), b)
+}
+
 /// Candidate positions of an inside legend of size (w, h), the builder's corner first.
 fn inside_candidates(lay: &Layout, pref: LegendAt, w: f64, h: f64) -> Vec<Bounds> {
     let p = lay.plot;
@@ -440,18 +446,34 @@ pub(crate) fn place(fig: &Figure, ty: Type, entries: &[Entry]) -> (Layout, Optio
             return (inside, Some((*b, a)));
         }
     }
-    // Every corner covers data: outside, below (wide figures) or right, if the plot keeps
-    // enough room.
-    let below = layout(fig, ty, entries, LegendMode::Below);
-    if below.plot.h >= 0.45 * below.h && below.outside.as_ref().is_some_and(|(b, _)| b.bottom() <= below.h) {
-        return (below, None);
+    // Every corner covers data (or the legend is too big for the plot): outside, below or to
+    // the right, if the plot keeps enough room — generous room first, then less.
+    let outside = |ty: Type, mode: LegendMode, share: f64| -> Option<Layout> {
+        let lay = layout(fig, ty, entries, mode);
+        let room = if mode == LegendMode::Below { lay.plot.h / lay.h } else { lay.plot.w / lay.w };
+        let inside_figure = lay.outside.as_ref().is_some_and(|(b, _)| b.bottom() <= lay.h - 0.5 * ty.pad && b.right() <= lay.w);
+        (room >= share && inside_figure).then_some(lay)
+    };
+    for (mode, share) in [(LegendMode::Below, 0.45), (LegendMode::Right, 0.5), (LegendMode::Below, 0.3), (LegendMode::Right, 0.4)] {
+        if let Some(lay) = outside(ty, mode, share) {
+            return (lay, None);
+        }
     }
-    let right = layout(fig, ty, entries, LegendMode::Right);
-    if right.plot.w >= 0.5 * right.w && right.outside.as_ref().is_some_and(|(b, _)| b.bottom() <= right.h) {
-        return (right, None);
+    // No room outside either (a small figure): the inside position covering the least, if the
+    // legend fits in the plot.
+    if fits {
+        let best = cands.into_iter().min_by_key(|b| covered(&g, b)).unwrap_or(inside.plot);
+        return (inside, Some((best, a)));
     }
-    // No room outside either (a small figure): the inside position covering the least.
-    let best = cands.into_iter().min_by_key(|b| covered(&g, b)).unwrap_or(inside.plot);
-    (inside, Some((best, a)))
+    // A long legend on a small figure: smaller legend type (down to 80 %) below or right.
+    for k in [0.9, 0.8] {
+        let small = Type { legend: k * ty.legend, ..ty };
+        for (mode, share) in [(LegendMode::Below, 0.25), (LegendMode::Right, 0.35)] {
+            if let Some(lay) = outside(small, mode, share) {
+                return (lay, None);
+            }
+        }
+    }
+    (layout(fig, Type { legend: 0.8 * ty.legend, ..ty }, entries, LegendMode::Below), None)
 }
 

@@ -26,6 +26,8 @@ pub mod ticks;
 
 mod layout;
 mod model;
+#[cfg(test)]
+mod quality_tests;
 mod render;
 
 pub use model::*;

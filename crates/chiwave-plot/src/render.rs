@@ -489,10 +489,11 @@ pub fn render(fig: &Figure) -> Result<(String, PlotFrame), PlotError> {
         heatmap::draw_colour_bar(&mut svg, heat, bar, &ty, p);
     }
     if let Some((b, a)) = &inside_legend {
-        draw_legend(&mut svg, &ty, b, a, true);
+        draw_legend(&mut svg, &lay.ty, b, a, true);
     }
     if let Some((b, a)) = &lay.outside {
-        draw_legend(&mut svg, &ty, b, a, false);
+        // The layout's type: a long legend on a small figure may use a smaller legend size.
+        draw_legend(&mut svg, &lay.ty, b, a, false);
     }
     Ok((svg.finish(), frame))
 }

@@ -53,9 +53,15 @@ pub fn advance(c: char) -> f64 {
     }
 }
 
-/// Estimated width of `s` at font size `size` (px).
+/// Average advance below which no estimate goes (em per character): a margin for faces and
+/// fallback fonts wider than the table in running lower-case text.
+pub const MIN_AVERAGE: f64 = 0.6;
+
+/// Estimated width of `s` at font size `size` (px): the sum of the advances, but never less
+/// than [`MIN_AVERAGE`] em per character.
 pub fn width(s: &str, size: f64) -> f64 {
-    s.chars().map(advance).sum::<f64>() * size
+    let (sum, n) = s.chars().fold((0.0, 0usize), |(a, n), c| (a + advance(c), n + 1));
+    sum.max(MIN_AVERAGE * n as f64) * size
 }
 
 /// Estimated width of `s` in bold (about 10 % wider).
@@ -64,13 +70,34 @@ pub fn width_bold(s: &str, size: f64) -> f64 {
 }
 
 /// Breaks `s` into lines no wider than `max_w` (estimated) at spaces, at most `max_lines`
-/// lines; a last line that still does not fit ends in "…". A single word longer than the
-/// line is cut with "…" too. `bold` selects the bold estimate.
+/// lines, as even in length as the breaks allow (no lone last word); a last line that still
+/// does not fit ends in "…". A single word longer than the line is cut with "…" too. `bold`
+/// selects the bold estimate.
 pub fn wrap(s: &str, size: f64, max_w: f64, max_lines: usize, bold: bool) -> Vec<String> {
     let w = |t: &str| if bold { width_bold(t, size) } else { width(t, size) };
     if w(s) <= max_w || max_lines == 0 {
         return vec![s.to_string()];
     }
+    let lines = greedy(s, &w, max_w);
+    if lines.len() > max_lines || lines.len() < 2 {
+        return finish(lines, max_lines, max_w, size, bold);
+    }
+    // Balance: the narrowest width that still gives the same number of lines.
+    let n = lines.len();
+    let (mut lo, mut hi) = (max_w / n as f64, max_w);
+    for _ in 0..30 {
+        let mid = 0.5 * (lo + hi);
+        if greedy(s, &w, mid).len() <= n {
+            hi = mid;
+        } else {
+            lo = mid;
+        }
+    }
+    finish(greedy(s, &w, hi), max_lines, max_w, size, bold)
+}
+
+/// Greedy line breaking at spaces (a word longer than the line gets a line of its own).
+fn greedy(s: &str, w: &dyn Fn(&str) -> f64, max_w: f64) -> Vec<String> {
     let mut lines: Vec<String> = Vec::new();
     let mut cur = String::new();
     for word in s.split(' ').filter(|x| !x.is_empty()) {
@@ -85,6 +112,12 @@ pub fn wrap(s: &str, size: f64, max_w: f64, max_lines: usize, bold: bool) -> Vec
     if !cur.is_empty() {
         lines.push(cur);
     }
+    lines
+}
+
+/// At most `max_lines` lines (the rest joined into the last), each cut to `max_w` with "…".
+fn finish(mut lines: Vec<String>, max_lines: usize, max_w: f64, size: f64, bold: bool) -> Vec<String> {
+    let w = |t: &str| if bold { width_bold(t, size) } else { width(t, size) };
     if lines.len() > max_lines {
         let rest = lines[max_lines - 1..].join(" ");
         lines.truncate(max_lines - 1);
@@ -100,16 +133,15 @@ pub fn wrap(s: &str, size: f64, max_w: f64, max_lines: usize, bold: bool) -> Vec
 
 /// `s` cut so that it fits `max_w` with a trailing "…".
 pub fn ellipsis(s: &str, size: f64, max_w: f64, bold: bool) -> String {
-    let k = if bold { 1.1 } else { 1.0 };
+    let w = |t: &str| if bold { width_bold(t, size) } else { width(t, size) };
     let mut out = String::new();
-    let mut acc = advance('…') * size * k;
     for c in s.chars() {
-        let a = advance(c) * size * k;
-        if acc + a > max_w {
+        let mut cand = out.clone();
+        cand.push(c);
+        if w(&format!("{cand}…")) > max_w {
             break;
         }
-        acc += a;
-        out.push(c);
+        out = cand;
     }
     let out = out.trim_end().to_string();
     format!("{out}…")
@@ -156,7 +188,8 @@ mod tests {
         // Tabular digits: every digit has the same advance (common practice in text faces).
         assert!((width("0123456789", 10.0) - 10.0 * width("0", 10.0)).abs() < 1e-9);
         assert!(width("M", 12.0) > width("i", 12.0));
-        assert!((width("ab", 10.0) - width("a", 10.0) - width("b", 10.0)).abs() < 1e-12);
+        assert!((width("mw", 10.0) - width("m", 10.0) - width("w", 10.0)).abs() < 1e-12);
+        assert!((width("ill", 10.0) - 3.0 * MIN_AVERAGE * 10.0).abs() < 1e-12, "narrow text gets the minimum average");
     }
 
     #[test]
@@ -165,6 +198,10 @@ mod tests {
         let lines = wrap(s, 13.0, 160.0, 2, false);
         assert_eq!(lines.len(), 2, "{lines:?}");
         assert!(lines.iter().all(|l| width(l, 13.0) <= 160.0), "{lines:?}");
+        // Balanced: two lines of similar length rather than a lone last word.
+        let t = wrap("Electromagnetic spectrum (closed-form Bessel K0/K1), rest frame of body 2", 15.0, 600.0, 2, true);
+        assert_eq!(t.len(), 2);
+        assert!(t[1].split(' ').count() > 2, "{t:?}");
         let one = wrap("short", 13.0, 160.0, 2, false);
         assert_eq!(one, vec!["short".to_string()]);
         let cut = wrap("averyveryverylongwordwithoutspaces", 13.0, 80.0, 1, false);
