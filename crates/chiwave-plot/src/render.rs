@@ -205,7 +205,11 @@ pub(crate) fn clip(p: (f64, f64), q: (f64, f64), b: (f64, f64, f64, f64)) -> Opt
             }
         }
     }
-    Some(((p.0 + t0 * dx, p.1 + t0 * dy), (p.0 + t1 * dx, p.1 + t1 * dy)))
+    // Unclipped ends are returned exactly (p + 1·(q − p) can differ from q in the last bit,
+    // which would break a polyline in two at every sample).
+    let a = if t0 == 0.0 { p } else { (p.0 + t0 * dx, p.1 + t0 * dy) };
+    let b = if t1 == 1.0 { q } else { (p.0 + t1 * dx, p.1 + t1 * dy) };
+    Some((a, b))
 }
 
 /// Splits a series into drawable polylines in axis space, clipped to the box; gaps (None,
@@ -234,7 +238,7 @@ pub(crate) fn polylines(
                     if cur.is_empty() {
                         cur.push(c0);
                     } else if let Some(&last) = cur.last() {
-                        if (last.0 - c0.0).abs() > 1e-12 || (last.1 - c0.1).abs() > 1e-12 {
+                        if last != c0 {
                             out.push(std::mem::take(&mut cur));
                             cur.push(c0);
                         }
@@ -604,6 +608,16 @@ mod tests {
         let (x, _) = fr.to_data(fr.left + fr.width / 2.0, fr.top);
         // geometric mean of 1 and 1000, common practice, no source
         assert!((x - 1000f64.sqrt()).abs() < 1e-9 * 31.6);
+    }
+
+    #[test]
+    fn a_curve_far_from_the_origin_stays_one_path() {
+        // x ~ 1e7 (seconds), y ~ 1e-25 (strain): p + (q − p) ≠ q in floating point, yet
+        // consecutive unclipped segments must join into one polyline.
+        let pts: Vec<Option<(f64, f64)>> = (0..800).map(|k| Some((-1.0e7 + 2.5e4 * k as f64 + 0.1, 1e-25 * (k as f64 * 0.01).sin()))).collect();
+        let lines = polylines(&pts, false, false, (-2e7, 2e7, -1e-24, 1e-24));
+        assert_eq!(lines.len(), 1);
+        assert_eq!(lines[0].len(), 800);
     }
 
     #[test]
