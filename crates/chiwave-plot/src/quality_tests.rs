@@ -148,7 +148,7 @@ fn path_numbers(doc: &roxmltree::Document) -> Vec<f64> {
     doc.descendants()
         .filter(|n| n.has_tag_name("path"))
         .filter_map(|n| n.attribute("d"))
-        .flat_map(|d| d.split(|c: char| c == ' ' || c == 'M' || c == 'L').filter(|s| !s.is_empty()).map(|s| s.parse::<f64>().unwrap_or(f64::NAN)).collect::<Vec<_>>())
+        .flat_map(|d| d.split([' ', 'M', 'L']).filter(|s| !s.is_empty()).map(|s| s.parse::<f64>().unwrap_or(f64::NAN)).collect::<Vec<_>>())
         .collect()
 }
 

@@ -15,7 +15,7 @@
 //! ([`crate::colour::distinct_styles`]). Marker sets get distinct shapes in order (circle,
 //! square, diamond, triangles). The legend goes to the corner of the plot that covers no drawn
 //! data — the builder's corner first — and, when every corner covers data, outside the plot
-//! (below it, or to its right), measured on the drawn pixel geometry.
+//! (below it, or to its right), measured on the drawn pixel geometry ([`crate::layout`]).
 
 use crate::colour::{self, palette};
 use crate::heatmap;
@@ -65,7 +65,7 @@ pub(crate) fn text_h(s: f64) -> f64 {
     (ASCENT + DESCENT) * s
 }
 
-/// Baseline offset that centres a line of digits on a point (half the figure height ≈ 0.36 em).
+/// Baseline offset that centres a line of digits on a point (half a digit's height ≈ 0.36 em).
 pub(crate) fn centre_baseline(s: f64) -> f64 {
     0.36 * s
 }
