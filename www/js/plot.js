@@ -1,5 +1,6 @@
 // A plot card: shows a figure rendered by the wasm module (SVG string + plot frame), a
-// crosshair with a readout of every series near the cursor, and SVG/PNG download buttons.
+// crosshair with a readout of every series near the cursor, and SVG/PNG download buttons (PNG at
+// 2× or 4× the figure size, rasterised from the same SVG).
 import { el, fmt, download, svgToPng } from './util.js';
 
 /** Pixel → data with the frame from the plot crate (log axes are linear in log10). */
@@ -102,10 +103,13 @@ export function plotCard(title, fileStem) {
   const readout = el('div', { class: 'readout', 'aria-live': 'polite' });
   const err = el('p', { class: 'plot-error', role: 'alert' });
   const svgBtn = el('button', { type: 'button', text: 'SVG', title: `Download “${title}” as SVG` });
-  const pngBtn = el('button', { type: 'button', text: 'PNG', title: `Download “${title}” as PNG` });
+  const pngBtn = el('button', { type: 'button', text: 'PNG', title: `Download “${title}” as PNG at the scale chosen beside it` });
+  // PNG resolution: the figure's SVG rasterised at 2× or 4× its size (same picture and fonts).
+  const pngScale = el('select', { class: 'png-scale', 'aria-label': `PNG scale for “${title}”`, title: 'PNG resolution (× the figure size)' },
+    el('option', { value: '2', text: '2×' }), el('option', { value: '4', text: '4×' }));
   const heading = el('h3', { text: title });
   const root = el('section', { class: 'card plot-card', 'data-plot': fileStem },
-    el('div', { class: 'plot-head' }, heading, el('div', { class: 'plot-tools' }, svgBtn, pngBtn)),
+    el('div', { class: 'plot-head' }, heading, el('div', { class: 'plot-tools' }, svgBtn, pngBtn, pngScale)),
     box, readout, err);
   let current = null;
   let cursor = null; // [px, py] in SVG pixels, for keyboard moves
@@ -178,8 +182,9 @@ export function plotCard(title, fileStem) {
   pngBtn.addEventListener('click', async () => {
     if (!current) return;
     try {
-      const png = await svgToPng(current.svg, current.frame.svg_width, current.frame.svg_height, 2);
-      download(`chiwave-${fileStem}.png`, png);
+      const scale = Number(pngScale.value) === 4 ? 4 : 2;
+      const png = await svgToPng(current.svg, current.frame.svg_width, current.frame.svg_height, scale);
+      download(`chiwave-${fileStem}@${scale}x.png`, png);
     } catch (e) {
       err.textContent = String(e.message || e);
     }

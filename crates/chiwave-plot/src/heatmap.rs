@@ -1,14 +1,17 @@
 //! A heat-map layer for [`crate::Figure`]: values on a rectangular grid of cells, each cell one
-//! filled SVG rectangle, with chiwave's own colour scale and a horizontal colour bar in the
-//! title row. Used for sky maps on a θ–φ rectangle (plate carrée).
+//! filled SVG rectangle, coloured with the perceptually uniform scale of
+//! [`crate::colour::sequential`] (low values dark, high values bright), with a vertical colour
+//! bar right of the plot: the scale, its ticks (decades on a log scale) and its caption, the
+//! quantity with its unit. Used for sky maps on a θ–φ rectangle.
 //!
 //! Cells are drawn in pixel space after the axis ranges are fixed, so the layer works with
 //! the same [`crate::PlotFrame`] as the line figures (hover turns a pixel back into (x, y)).
 
-use crate::render::{fs, perr, rgb, FONT};
-use crate::{PlotError, Rgb};
-use plotters::prelude::*;
-use plotters::style::text_anchor::{HPos, Pos, VPos};
+use crate::layout::Bar;
+use crate::render::{pitch, Type};
+use crate::svg::{Anchor, Stroke, Svg, TextSpec};
+use crate::text::{self, Bounds, ASCENT, DESCENT};
+use crate::{palette, ticks, Rgb};
 use serde::{Deserialize, Serialize};
 
 /// Values on cells: `values[i][j]` fills `y_edges[i]..y_edges[i+1]` × `x_edges[j]..x_edges[j+1]`.
@@ -27,29 +30,10 @@ pub struct Heat {
     pub decades: f64,
 }
 
-/// chiwave's sequential colour scale: pale sand → amber → coral → plum → deep indigo
-/// (our own stops; perceptually ordered by lightness).
-const STOPS: [(f64, Rgb); 6] = [
-    (0.0, [0xf7, 0xf3, 0xe8]),
-    (0.2, [0xf1, 0xd3, 0x8a]),
-    (0.42, [0xe3, 0x93, 0x4e]),
-    (0.62, [0xc4, 0x4f, 0x5a]),
-    (0.82, [0x7c, 0x34, 0x74]),
-    (1.0, [0x2a, 0x1f, 0x5c]),
-];
-
-/// Colour of the scale at t ∈ [0, 1] (clamped); linear interpolation between the stops.
+/// Colour of the scale at t ∈ [0, 1] (clamped; NaN is the low end): the sequential scale of
+/// [`crate::colour::sequential`], dark at 0 and bright at 1.
 pub fn colour(t: f64) -> Rgb {
-    let t = if t.is_finite() { t.clamp(0.0, 1.0) } else { 0.0 };
-    for w in STOPS.windows(2) {
-        let ((t0, c0), (t1, c1)) = (w[0], w[1]);
-        if t <= t1 {
-            let s = if t1 > t0 { (t - t0) / (t1 - t0) } else { 0.0 };
-            let mix = |a: u8, b: u8| (a as f64 + s * (b as f64 - a as f64)).round().clamp(0.0, 255.0) as u8;
-            return [mix(c0[0], c1[0]), mix(c0[1], c1[1]), mix(c0[2], c1[2])];
-        }
-    }
-    STOPS[STOPS.len() - 1].1
+    crate::colour::sequential(t)
 }
 
 impl Heat {
@@ -102,13 +86,11 @@ impl Heat {
     }
 }
 
-/// Draws the cells. `to_px` maps data (x, y) to backend pixels.
-pub(crate) fn draw_cells<DB: DrawingBackend>(
-    root: &DrawingArea<DB, plotters::coord::Shift>,
-    heat: &Heat,
-    to_px: &dyn Fn(f64, f64) -> (i32, i32),
-) -> Result<(), PlotError> {
-    let Some(sc) = heat.scale() else { return Ok(()) };
+/// Draws the cells. `to_px` maps data (x, y) to pixels. Each cell reaches half a pixel into
+/// its right and lower neighbours, which hides the hairline seams anti-aliasing leaves between
+/// exactly adjacent rectangles.
+pub(crate) fn draw_cells(svg: &mut Svg, heat: &Heat, to_px: &dyn Fn(f64, f64) -> (f64, f64)) {
+    let Some(sc) = heat.scale() else { return };
     for (i, row) in heat.values.iter().enumerate() {
         let (Some(&ya), Some(&yb)) = (heat.y_edges.get(i), heat.y_edges.get(i + 1)) else { continue };
         for (j, &v) in row.iter().enumerate() {
@@ -116,57 +98,88 @@ pub(crate) fn draw_cells<DB: DrawingBackend>(
             let Some(t) = heat.position(v, sc) else { continue };
             let p = to_px(xa, ya);
             let q = to_px(xb, yb);
-            // One pixel of overlap hides the hairline seams between neighbouring cells.
-            let (l, r) = (p.0.min(q.0), p.0.max(q.0) + 1);
-            let (t0, b0) = (p.1.min(q.1), p.1.max(q.1) + 1);
-            root.draw(&Rectangle::new([(l, t0), (r, b0)], rgb(colour(t)).filled())).map_err(perr)?;
+            let (l, r) = (p.0.min(q.0), p.0.max(q.0) + 0.5);
+            let (t0, b0) = (p.1.min(q.1), p.1.max(q.1) + 0.5);
+            svg.rect(l, t0, r - l, b0 - t0, Some((colour(t), 1.0)), None);
         }
     }
-    Ok(())
 }
 
-/// Number formatting for the colour-bar ends (3 significant digits).
-fn short(v: f64) -> String {
-    if v == 0.0 {
-        return "0".into();
-    }
-    let a = v.abs();
-    if (1e-2..1e4).contains(&a) {
-        let s = format!("{:.3}", v);
-        let s = s.trim_end_matches('0').trim_end_matches('.');
-        s.to_string()
-    } else {
-        format!("{:.2e}", v)
-    }
+/// The colour bar's ticks and caption for a bar `len` px tall.
+pub(crate) fn bar_layout(heat: &Heat, ty: &Type, len: f64) -> Bar {
+    let size = ty.small;
+    let ticks = match heat.scale() {
+        Some((lo, hi)) => {
+            let target = ((len / 55.0).round() as usize).clamp(2, 8);
+            let fits = |ts: &[ticks::Tick]| {
+                let lab: Vec<&ticks::Tick> = ts.iter().filter(|t| t.major && !t.label.is_empty()).collect();
+                lab.windows(2).all(|w| (w[1].at - w[0].at) / (hi - lo) * len >= 1.7 * size)
+            };
+            ticks::fitted(lo, hi, heat.log, target, &fits)
+        }
+        None => ticks::TickSet::default(),
+    };
+    let label_w = ticks.labelled().map(|t| text::width(&t.label, size)).fold(0.0, f64::max);
+    let caption = text::wrap(&heat.label, ty.tick, len, 2, false);
+    Bar { x: 0.0, width: 0.95 * ty.tick, ticks, caption, label_w }
 }
 
-/// Draws the colour bar (with its caption and end values) right-aligned in the title row,
-/// ending at pixel column `right`.
-pub(crate) fn draw_colour_bar<DB: DrawingBackend>(
-    root: &DrawingArea<DB, plotters::coord::Shift>,
-    heat: &Heat,
-    right: i32,
-) -> Result<(), PlotError> {
-    let Some((lo, hi)) = heat.scale() else { return Ok(()) };
-    let (w, h, top) = (200, 10, 8);
-    let left = right - w;
-    let steps = 40;
+/// Width from the plot's right edge to the end of the colour bar's caption.
+pub(crate) fn bar_block_width(bar: &Bar, ty: &Type) -> f64 {
+    2.2 * ty.gap + bar.width + 0.7 * ty.tick_len + ty.gap + bar.label_w + 1.6 * ty.gap + bar.caption.len() as f64 * pitch(ty.tick)
+}
+
+/// Draws the colour bar beside the plot area `plot`: the scale from low (bottom) to high
+/// (top), its ticks and labels, and the caption (quantity and unit) reading upwards.
+pub(crate) fn draw_colour_bar(svg: &mut Svg, heat: &Heat, bar: &Bar, ty: &Type, plot: Bounds) {
+    let Some((lo, hi)) = heat.scale() else { return };
+    let (x, w, top, h) = (bar.x, bar.width, plot.y, plot.h);
+    let steps = 128;
     for k in 0..steps {
-        let x0 = left + k * w / steps;
-        let x1 = left + (k + 1) * w / steps + 1;
+        let y1 = top + h - k as f64 * h / steps as f64;
+        let y0 = top + h - (k + 1) as f64 * h / steps as f64;
         let c = colour((k as f64 + 0.5) / steps as f64);
-        root.draw(&Rectangle::new([(x0, top), (x1, top + h)], rgb(c).filled())).map_err(perr)?;
+        // Half a pixel of overlap hides the seams between slices.
+        svg.rect(x, y0, w, (y1 - y0) + if k == 0 { 0.0 } else { 0.5 }, Some((c, 1.0)), None);
     }
-    root.draw(&Rectangle::new([(left, top), (left + w, top + h)], rgb(crate::palette::AXIS).stroke_width(1))).map_err(perr)?;
-    let ink = rgb(crate::palette::INK);
-    let font = (FONT, fs(11.0)).into_font().color(&ink);
-    let (a, b) = if heat.log { (10f64.powf(lo), 10f64.powf(hi)) } else { (lo, hi) };
-    let below = top + h + 3;
-    root.draw(&Text::new(short(a), (left, below), font.pos(Pos::new(HPos::Left, VPos::Top)))).map_err(perr)?;
-    root.draw(&Text::new(short(b), (left + w, below), font.pos(Pos::new(HPos::Right, VPos::Top)))).map_err(perr)?;
-    let cap = if heat.log { format!("{}, log", heat.label) } else { heat.label.clone() };
-    root.draw(&Text::new(cap, (left + w / 2, below), font.pos(Pos::new(HPos::Center, VPos::Top)))).map_err(perr)?;
-    Ok(())
+    let axis = Stroke::solid(palette::AXIS, 1.0);
+    svg.rect(x, top, w, h, None, Some(&axis));
+    let size = ty.small;
+    let at_y = |a: f64| top + h - (a - lo) / (hi - lo) * h;
+    let tl = 0.7 * ty.tick_len;
+    for t in &bar.ticks.ticks {
+        let y = at_y(t.at);
+        let len = if t.major { tl } else { 0.55 * tl };
+        svg.path(&[(x + w, y), (x + w + len, y)], &axis);
+        if t.major && !t.label.is_empty() {
+            svg.text(&TextSpec {
+                x: x + w + tl + ty.gap,
+                y: y + 0.36 * size,
+                text: &t.label,
+                size,
+                anchor: Anchor::Start,
+                bold: false,
+                rotate: 0.0,
+                color: palette::INK,
+            });
+        }
+    }
+    if let Some(f) = &bar.ticks.factor {
+        svg.text(&TextSpec { x, y: top - ty.gap - DESCENT * size, text: f, size, anchor: Anchor::Start, bold: false, rotate: 0.0, color: palette::INK });
+    }
+    let cx = x + w + tl + ty.gap + bar.label_w + 1.6 * ty.gap;
+    for (k, line) in bar.caption.iter().enumerate() {
+        svg.text(&TextSpec {
+            x: cx + ASCENT * ty.tick + k as f64 * pitch(ty.tick),
+            y: top + 0.5 * h,
+            text: line,
+            size: ty.tick,
+            anchor: Anchor::Middle,
+            bold: false,
+            rotate: -90.0,
+            color: palette::INK,
+        });
+    }
 }
 
 #[cfg(test)]
@@ -175,18 +188,19 @@ mod tests {
 
     #[test]
     fn colour_scale_ends_and_monotone_lightness() {
-        assert_eq!(colour(0.0), STOPS[0].1);
-        assert_eq!(colour(1.0), STOPS[5].1);
-        assert_eq!(colour(-3.0), STOPS[0].1);
-        assert_eq!(colour(f64::NAN), STOPS[0].1);
-        // Relative luminance (Rec. 709 weights, common practice, no source) falls along the scale.
-        let lum = |c: Rgb| 0.2126 * c[0] as f64 + 0.7152 * c[1] as f64 + 0.0722 * c[2] as f64;
-        let mut prev = f64::INFINITY;
+        // The scale runs from dark (low values) to bright (high values): lightness L* of the
+        // drawn colours rises along it (CIELAB, CIE 15:2004; see crate::colour for the scale's
+        // own tests of uniformity).
+        assert_eq!(colour(-3.0), colour(0.0));
+        assert_eq!(colour(f64::NAN), colour(0.0));
+        assert_eq!(colour(7.0), colour(1.0));
+        let mut prev = f64::NEG_INFINITY;
         for k in 0..=50 {
-            let l = lum(colour(k as f64 / 50.0));
-            assert!(l < prev, "lightness not decreasing at {k}");
+            let l = crate::colour::rgb_to_lab(colour(k as f64 / 50.0))[0];
+            assert!(l > prev, "lightness not increasing at {k}");
             prev = l;
         }
+        assert!(crate::colour::rgb_to_lab(colour(0.0))[0] < 20.0 && crate::colour::rgb_to_lab(colour(1.0))[0] > 90.0);
     }
 
     #[test]
@@ -205,5 +219,16 @@ mod tests {
         assert_eq!(h.position(f64::NAN, (lo, hi)), None);
         // log10(1) = 0 is two thirds of the way from −2 to 1 (arithmetic, no source).
         assert!((h.position(1.0, (lo, hi)).unwrap() - 2.0 / 3.0).abs() < 1e-12);
+    }
+
+    #[test]
+    fn colour_bar_has_labelled_decades_on_a_log_scale() {
+        let h = Heat { x_edges: vec![0.0, 1.0], y_edges: vec![0.0, 1.0], values: vec![vec![3e-9, 2e-5]], label: "dE/dΩ [M]".into(), log: true, decades: 4.0 };
+        let ty = Type::for_size(760.0, 440.0);
+        let bar = bar_layout(&h, &ty, 300.0);
+        let labels: Vec<&str> = bar.ticks.labelled().map(|t| t.label.as_str()).collect();
+        assert!(labels.len() >= 2, "{labels:?}");
+        assert!(labels.contains(&"10⁻⁶") && labels.contains(&"10⁻⁷"), "{labels:?}");
+        assert_eq!(bar.caption, vec!["dE/dΩ [M]".to_string()]);
     }
 }

@@ -1,5 +1,5 @@
-//! The figure model: a generic [`Figure`] (axes, series, bands, markers, legend), the palette,
-//! and what a rendering returns to the page ([`PlotFrame`], [`Rendered`]).
+//! The figure model: a generic [`Figure`] (axes, series, bands, markers, legend) and what a
+//! rendering returns to the page ([`PlotFrame`], [`Rendered`]). Colours: [`crate::colour`].
 
 use crate::heatmap;
 use serde::{Deserialize, Serialize};
@@ -7,23 +7,9 @@ use serde::{Deserialize, Serialize};
 /// An RGB colour.
 pub type Rgb = [u8; 3];
 
-/// chiwave's palette (ink first).
-pub mod palette {
-    use super::Rgb;
-    pub const INK: Rgb = [0x1f, 0x24, 0x2e];
-    pub const GRID: Rgb = [0xe3, 0xe6, 0xec];
-    pub const AXIS: Rgb = [0x55, 0x5d, 0x6b];
-    pub const TEAL: Rgb = [0x0b, 0x6e, 0x79];
-    pub const CORAL: Rgb = [0xc8, 0x3e, 0x4d];
-    pub const AMBER: Rgb = [0xc9, 0x8a, 0x0b];
-    pub const INDIGO: Rgb = [0x43, 0x4a, 0xa8];
-    pub const MOSS: Rgb = [0x4f, 0x8a, 0x2e];
-    pub const PLUM: Rgb = [0x8a, 0x4f, 0x7d];
-    pub const SLATE: Rgb = [0x6b, 0x72, 0x80];
-    pub const SAND: Rgb = [0xf3, 0xe3, 0xc3];
-    /// Cycle used for the partial sums of a series.
-    pub const CYCLE: [Rgb; 6] = [INDIGO, AMBER, MOSS, PLUM, SLATE, CORAL];
-}
+/// chiwave's named colours (the Okabe & Ito 2008 series palette and the neutrals): see
+/// [`crate::colour`].
+pub use crate::colour::palette;
 
 /// How a line is stroked.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
@@ -33,6 +19,15 @@ pub enum Dash {
     Solid,
     Dashed,
     Dotted,
+    /// Dash, dot, dash, dot.
+    #[serde(rename = "dash_dot")]
+    DashDot,
+    /// Long dashes.
+    #[serde(rename = "long_dash")]
+    LongDash,
+    /// Dash, dot, dot.
+    #[serde(rename = "dash_dot_dot")]
+    DashDotDot,
 }
 
 /// Line style of a series.
@@ -114,7 +109,9 @@ impl Axis {
     }
 }
 
-/// Where the legend box sits inside the plot area.
+/// The builder's preferred corner for the legend. The drawing routine keeps it when the
+/// legend covers no data there; otherwise it takes another empty corner, or puts the legend
+/// outside the plot (see [`crate::render`]). `None` draws no legend.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "snake_case")]
 pub enum LegendAt {
@@ -239,7 +236,7 @@ pub struct Rendered {
     pub heat: Option<heatmap::Heat>,
 }
 
-/// Drawing failed (only a backend write error can cause this).
+/// Drawing failed (kept for callers; the SVG writer itself cannot fail).
 #[derive(Debug, Clone, PartialEq)]
 pub struct PlotError(pub String);
 

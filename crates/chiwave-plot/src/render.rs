@@ -1,29 +1,142 @@
-//! The one drawing routine: a [`Figure`] into an SVG string with plotters' SVG backend, and the
-//! plot frame the page inverts for its hover readout.
+//! The one drawing routine: a [`Figure`] into an SVG string (see [`crate::svg`]: fractional
+//! coordinates, standard fonts), and the plot frame the page inverts for its hover readout.
+//!
+//! # Layout
+//! Nothing is placed at a fixed offset: the routine wraps the title to the width, chooses the
+//! ticks so that their labels do not touch (estimated extents, [`crate::text`]), sets the left
+//! margin from the widest y tick label plus the y-axis title (so the title never overprints
+//! the labels), the bottom margin from the x tick labels and title, and the right margin from
+//! the last x label, the colour bar and an outside legend. Type sizes follow the figure size
+//! gently (×0.8 … ×1.3 of the sizes at 760 × 460 px).
+//!
+//! # Series, markers, legend
+//! Series keep their builders' colours (the Okabe–Ito palette, [`crate::colour`]); a labelled
+//! series that would look like an earlier one gets another dash pattern
+//! ([`crate::colour::distinct_styles`]). Marker sets get distinct shapes in order (circle,
+//! square, diamond, triangles). The legend goes to the corner of the plot that covers no drawn
+//! data — the builder's corner first — and, when every corner covers data, outside the plot
+//! (below it, or to its right), measured on the drawn pixel geometry ([`crate::layout`]).
 
+use crate::colour::{self, palette};
+use crate::heatmap;
 use crate::model::*;
-use crate::{heatmap, ticks};
-use plotters::prelude::*;
-use plotters::style::text_anchor::{HPos, Pos, VPos};
+use crate::svg::{Anchor, Stroke, Svg, TextSpec};
+use crate::text::{ASCENT, DESCENT};
+use crate::layout::{legend_entries, draw_legend, place};
 
-pub(crate) fn perr<E: std::fmt::Debug>(e: E) -> PlotError {
-    PlotError(format!("{e:?}"))
+/// Type sizes and spacings (px) for one figure size.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub(crate) struct Type {
+    pub title: f64,
+    pub label: f64,
+    pub tick: f64,
+    pub legend: f64,
+    pub small: f64,
+    pub pad: f64,
+    pub gap: f64,
+    pub tick_len: f64,
 }
 
-pub(crate) fn rgb(c: Rgb) -> RGBColor {
-    RGBColor(c[0], c[1], c[2])
+impl Type {
+    /// Sizes for a `w` × `h` px figure: 15.5/13.5/12 px (title/axis titles/ticks and legend)
+    /// at 760 × 460, scaled by the square root of the smaller size ratio, within ×0.8 … ×1.3.
+    pub(crate) fn for_size(w: f64, h: f64) -> Type {
+        let k = (w / 760.0).min(h / 460.0).sqrt().clamp(0.8, 1.3);
+        Type {
+            title: 15.5 * k,
+            label: 13.5 * k,
+            tick: 12.0 * k,
+            legend: 12.0 * k,
+            small: 11.0 * k,
+            pad: 10.0 * k,
+            gap: 5.0 * k,
+            tick_len: 6.0 * k,
+        }
+    }
 }
 
-// Layout in pixels (fixed; text is never measured).
-const MARGIN_LEFT: i32 = 86;
-const MARGIN_RIGHT: i32 = 24;
-const MARGIN_TOP: i32 = 46;
-const MARGIN_BOTTOM: i32 = 62;
-pub(crate) const FONT: &str = "sans-serif";
+/// Line pitch of text of size `s`.
+pub(crate) fn pitch(s: f64) -> f64 {
+    1.25 * s
+}
 
-/// plotters' SVG backend writes `font-size = size / 1.24`; this gives `px` on the page.
-pub(crate) fn fs(px: f64) -> f64 {
-    px * 1.24
+/// Height of one line of text (ascent + descent).
+pub(crate) fn text_h(s: f64) -> f64 {
+    (ASCENT + DESCENT) * s
+}
+
+/// Baseline offset that centres a line of digits on a point (half a digit's height ≈ 0.36 em).
+pub(crate) fn centre_baseline(s: f64) -> f64 {
+    0.36 * s
+}
+
+/// The stroke of a series style (dash lengths scale gently with the width).
+pub(crate) fn stroke_of(st: &Style) -> Stroke {
+    let w = st.width.max(1) as f64;
+    let k = (w / 2.0).sqrt().max(0.8);
+    let (dash, round): (Vec<f64>, bool) = match st.dash {
+        Dash::Solid => (Vec::new(), false),
+        Dash::Dashed => (vec![7.0 * k, 4.0 * k], false),
+        // Round-capped dots at least 1.6 px long, so thin dotted lines stay visible.
+        Dash::Dotted => (vec![(1.6 - w).max(0.01), 3.2 * k + w], true),
+        Dash::DashDot => (vec![8.0 * k, 3.0 * k + w, 0.01, 3.0 * k + w], true),
+        Dash::LongDash => (vec![15.0 * k, 5.0 * k], false),
+        Dash::DashDotDot => (vec![8.0 * k, 3.0 * k + w, 0.01, 2.5 * k + w, 0.01, 3.0 * k + w], true),
+    };
+    Stroke { color: st.color, width: w, opacity: 1.0, dash, round_cap: round }
+}
+
+/// Marker shapes, given to a figure's marker sets in order.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub(crate) enum Shape {
+    Circle,
+    Square,
+    Diamond,
+    TriangleUp,
+    TriangleDown,
+}
+
+const SHAPES: [Shape; 5] = [Shape::Circle, Shape::Square, Shape::Diamond, Shape::TriangleUp, Shape::TriangleDown];
+
+/// The shape of each marker set: distinct shapes in order when a figure has several labelled
+/// sets; a set with error bars (measured data) is always a circle.
+pub(crate) fn marker_shapes(fig: &Figure) -> Vec<Shape> {
+    let mut k = 0;
+    fig.markers
+        .iter()
+        .map(|m| {
+            if !m.error_bars.is_empty() {
+                return Shape::Circle;
+            }
+            let s = SHAPES[k % SHAPES.len()];
+            k += 1;
+            s
+        })
+        .collect()
+}
+
+pub(crate) fn draw_marker(svg: &mut Svg, shape: Shape, x: f64, y: f64, r: f64, color: Rgb) {
+    let st = Stroke::solid(color, 2.0);
+    let fill = Some((palette::WHITE, 1.0));
+    match shape {
+        Shape::Circle => svg.circle(x, y, r, fill, Some(&st)),
+        Shape::Square => {
+            let a = 0.9 * r;
+            svg.rect(x - a, y - a, 2.0 * a, 2.0 * a, fill, Some(&st));
+        }
+        Shape::Diamond => {
+            let a = 1.25 * r;
+            svg.polygon(&[(x, y - a), (x + a, y), (x, y + a), (x - a, y)], (palette::WHITE, 1.0), Some(&st));
+        }
+        Shape::TriangleUp => {
+            let a = 1.3 * r;
+            svg.polygon(&[(x, y - a), (x + 0.87 * a, y + 0.5 * a), (x - 0.87 * a, y + 0.5 * a)], (palette::WHITE, 1.0), Some(&st));
+        }
+        Shape::TriangleDown => {
+            let a = 1.3 * r;
+            svg.polygon(&[(x, y + a), (x + 0.87 * a, y - 0.5 * a), (x - 0.87 * a, y - 0.5 * a)], (palette::WHITE, 1.0), Some(&st));
+        }
+    }
 }
 
 /// Range of the finite values in axis space (log10 for log axes, positives only).
@@ -70,7 +183,7 @@ fn axis_range(axis: &Axis, values: Vec<f64>) -> (f64, f64) {
 }
 
 /// Clips the segment p–q (axis space) to the box; Liang–Barsky.
-fn clip(p: (f64, f64), q: (f64, f64), b: (f64, f64, f64, f64)) -> Option<((f64, f64), (f64, f64))> {
+pub(crate) fn clip(p: (f64, f64), q: (f64, f64), b: (f64, f64, f64, f64)) -> Option<((f64, f64), (f64, f64))> {
     let (x0, x1, y0, y1) = b;
     let (dx, dy) = (q.0 - p.0, q.1 - p.1);
     let mut t0 = 0.0f64;
@@ -92,12 +205,16 @@ fn clip(p: (f64, f64), q: (f64, f64), b: (f64, f64, f64, f64)) -> Option<((f64, 
             }
         }
     }
-    Some(((p.0 + t0 * dx, p.1 + t0 * dy), (p.0 + t1 * dx, p.1 + t1 * dy)))
+    // Unclipped ends are returned exactly (p + 1·(q − p) can differ from q in the last bit,
+    // which would break a polyline in two at every sample).
+    let a = if t0 == 0.0 { p } else { (p.0 + t0 * dx, p.1 + t0 * dy) };
+    let b = if t1 == 1.0 { q } else { (p.0 + t1 * dx, p.1 + t1 * dy) };
+    Some((a, b))
 }
 
 /// Splits a series into drawable polylines in axis space, clipped to the box; gaps (None,
 /// non-finite or non-positive values on log axes) break the line.
-fn polylines(
+pub(crate) fn polylines(
     pts: &[Option<(f64, f64)>],
     xlog: bool,
     ylog: bool,
@@ -121,7 +238,7 @@ fn polylines(
                     if cur.is_empty() {
                         cur.push(c0);
                     } else if let Some(&last) = cur.last() {
-                        if (last.0 - c0.0).abs() > 1e-12 || (last.1 - c0.1).abs() > 1e-12 {
+                        if last != c0 {
                             out.push(std::mem::take(&mut cur));
                             cur.push(c0);
                         }
@@ -161,7 +278,7 @@ fn polylines(
 }
 
 /// The ranges the figure will show, in axis space: (x0, x1, y0, y1).
-fn ranges(fig: &Figure, plot_w: f64, plot_h: f64) -> (f64, f64, f64, f64) {
+pub(crate) fn ranges(fig: &Figure, plot_w: f64, plot_h: f64) -> (f64, f64, f64, f64) {
     let mut xs = Vec::new();
     let mut ys = Vec::new();
     for s in &fig.series {
@@ -201,242 +318,188 @@ fn ranges(fig: &Figure, plot_w: f64, plot_h: f64) -> (f64, f64, f64, f64) {
     (x0, x1, y0, y1)
 }
 
+// ---------------------------------------------------------------------------------------------
+// Drawing
+
 /// Draws a figure: SVG text plus the plot frame.
 ///
 /// # Errors
-/// [`PlotError`] only if the SVG backend fails to write (it writes into a `String`).
+/// None in practice ([`PlotError`] is kept in the signature for callers; the SVG is written
+/// into a `String`).
 pub fn render(fig: &Figure) -> Result<(String, PlotFrame), PlotError> {
     let (w, h) = (fig.width.max(200), fig.height.max(160));
-    let plot_w = (w as i32 - MARGIN_LEFT - MARGIN_RIGHT) as f64;
-    let plot_h = (h as i32 - MARGIN_TOP - MARGIN_BOTTOM) as f64;
-    let (x0, x1, y0, y1) = ranges(fig, plot_w, plot_h);
-    let mut svg = String::new();
-    let frame;
-    {
-        let root = SVGBackend::with_string(&mut svg, (w, h)).into_drawing_area();
-        root.fill(&WHITE).map_err(perr)?;
-        let mut chart = ChartBuilder::on(&root)
-            .margin_left(MARGIN_LEFT)
-            .margin_right(MARGIN_RIGHT)
-            .margin_top(MARGIN_TOP)
-            .margin_bottom(MARGIN_BOTTOM)
-            .build_cartesian_2d(x0..x1, y0..y1)
-            .map_err(perr)?;
-        let (l, t) = chart.backend_coord(&(x0, y1));
-        let (r, b) = chart.backend_coord(&(x1, y0));
-        frame = PlotFrame {
-            left: l as f64,
-            top: t as f64,
-            width: (r - l) as f64,
-            height: (b - t) as f64,
-            x_min: if fig.x.log { 10f64.powf(x0) } else { x0 },
-            x_max: if fig.x.log { 10f64.powf(x1) } else { x1 },
-            y_min: if fig.y.log { 10f64.powf(y0) } else { y0 },
-            y_max: if fig.y.log { 10f64.powf(y1) } else { y1 },
-            x_log: fig.x.log,
-            y_log: fig.y.log,
-            svg_width: w,
-            svg_height: h,
-        };
-        let bx = (x0, x1, y0, y1);
-        let xt = ticks::ticks(x0, x1, fig.x.log);
-        let yt = ticks::ticks(y0, y1, fig.y.log);
-        let grid = rgb(palette::GRID);
-        let axis_c = rgb(palette::AXIS);
-        let ink = rgb(palette::INK);
-
-        // Bands first (under everything).
-        for band in &fig.bands {
-            let bx0 = if fig.x.log && band.x0 <= 0.0 { f64::NEG_INFINITY } else if fig.x.log { band.x0.log10() } else { band.x0 };
-            let bx1 = if fig.x.log && band.x1 <= 0.0 { f64::NEG_INFINITY } else if fig.x.log { band.x1.log10() } else { band.x1 };
-            let (a, b2) = (bx0.max(x0), bx1.min(x1));
-            if a < b2 {
-                let c = rgb(band.color).mix(band.opacity.clamp(0.0, 1.0));
-                chart.draw_series(std::iter::once(Rectangle::new([(a, y0), (b2, y1)], c.filled()))).map_err(perr)?;
-            }
-        }
-        // Heat-map cells (over the bands, under the grid and the series).
-        if let Some(heat) = &fig.heat {
-            let tx = |v: f64| if fig.x.log { v.log10() } else { v };
-            let ty = |v: f64| if fig.y.log { v.log10() } else { v };
-            let to_px = |x: f64, y: f64| chart.backend_coord(&(tx(x).clamp(x0, x1), ty(y).clamp(y0, y1)));
-            heatmap::draw_cells(&root, heat, &to_px)?;
-        }
-        // Grid lines at major ticks (light over a heat map).
-        let grid = if fig.heat.is_some() { WHITE.mix(0.45) } else { grid.mix(1.0) };
-        for t in xt.iter().filter(|t| t.major) {
-            chart.draw_series(std::iter::once(PathElement::new(vec![(t.at, y0), (t.at, y1)], grid.stroke_width(1)))).map_err(perr)?;
-        }
-        for t in yt.iter().filter(|t| t.major) {
-            chart.draw_series(std::iter::once(PathElement::new(vec![(x0, t.at), (x1, t.at)], grid.stroke_width(1)))).map_err(perr)?;
-        }
-
-        // Series.
-        for s in &fig.series {
-            let lines = polylines(&s.points, fig.x.log, fig.y.log, bx);
-            let c = rgb(s.style.color);
-            for line in lines {
-                if let Some((fc, op)) = s.style.fill {
-                    chart
-                        .draw_series(std::iter::once(Polygon::new(line.clone(), rgb(fc).mix(op.clamp(0.0, 1.0)).filled())))
-                        .map_err(perr)?;
-                }
-                let st = c.stroke_width(s.style.width.max(1));
-                match s.style.dash {
-                    Dash::Solid => {
-                        chart.draw_series(LineSeries::new(line, st)).map_err(perr)?;
-                    }
-                    Dash::Dashed => {
-                        chart.draw_series(DashedLineSeries::new(line, 9, 6, st)).map_err(perr)?;
-                    }
-                    Dash::Dotted => {
-                        chart.draw_series(DashedLineSeries::new(line, 2, 5, st)).map_err(perr)?;
-                    }
-                }
-            }
-        }
-
-        // Markers and error bars.
-        let tx = |v: f64| if fig.x.log { v.log10() } else { v };
-        let ty = |v: f64| if fig.y.log { v.log10() } else { v };
-        let inside = |x: f64, y: f64| x.is_finite() && y.is_finite() && x >= x0 && x <= x1 && y >= y0 && y <= y1;
-        for m in &fig.markers {
-            let c = rgb(m.color);
-            for e in &m.error_bars {
-                let (ex, lo, hi) = (tx(e.x), ty(e.lo), ty(e.hi));
-                if let Some((p, q)) = (ex.is_finite() && lo.is_finite() && hi.is_finite()).then(|| clip((ex, lo), (ex, hi), bx)).flatten() {
-                    chart.draw_series(std::iter::once(PathElement::new(vec![p, q], c.stroke_width(2)))).map_err(perr)?;
-                    for end in [p, q] {
-                        let (px, py) = chart.backend_coord(&end);
-                        root.draw(&PathElement::new(vec![(px - 5, py), (px + 5, py)], c.stroke_width(2))).map_err(perr)?;
-                    }
-                }
-            }
-            for &(x, y) in &m.points {
-                let (ax, ay) = (tx(x), ty(y));
-                if inside(ax, ay) {
-                    chart.draw_series(std::iter::once(Circle::new((ax, ay), m.radius.max(2), WHITE.filled()))).map_err(perr)?;
-                    chart.draw_series(std::iter::once(Circle::new((ax, ay), m.radius.max(2), c.stroke_width(2)))).map_err(perr)?;
-                }
-            }
-        }
-
-        // Frame and ticks.
-        root.draw(&Rectangle::new([(l, t), (r, b)], axis_c.stroke_width(1))).map_err(perr)?;
-        let tick_font = (FONT, fs(13.0)).into_font().color(&ink);
-        for tk in &xt {
-            let (px, _) = chart.backend_coord(&(tk.at, y0));
-            let len = if tk.major { 6 } else { 3 };
-            root.draw(&PathElement::new(vec![(px, b), (px, b + len)], axis_c.stroke_width(1))).map_err(perr)?;
-            if tk.major && !tk.label.is_empty() {
-                root.draw(&Text::new(tk.label.clone(), (px, b + 9), tick_font.pos(Pos::new(HPos::Center, VPos::Top))))
-                    .map_err(perr)?;
-            }
-        }
-        for tk in &yt {
-            let (_, py) = chart.backend_coord(&(x0, tk.at));
-            let len = if tk.major { 6 } else { 3 };
-            root.draw(&PathElement::new(vec![(l - len, py), (l, py)], axis_c.stroke_width(1))).map_err(perr)?;
-            if tk.major && !tk.label.is_empty() {
-                root.draw(&Text::new(tk.label.clone(), (l - 9, py), tick_font.pos(Pos::new(HPos::Right, VPos::Center))))
-                    .map_err(perr)?;
-            }
-        }
-
-        // Axis labels and title.
-        let label_font = (FONT, fs(15.0)).into_font().color(&ink);
-        root.draw(&Text::new(
-            fig.x.label.clone(),
-            ((l + r) / 2, h as i32 - 12),
-            label_font.pos(Pos::new(HPos::Center, VPos::Bottom)),
-        ))
-        .map_err(perr)?;
-        root.draw(&Text::new(
-            fig.y.label.clone(),
-            (18, (t + b) / 2),
-            label_font.transform(FontTransform::Rotate270).pos(Pos::new(HPos::Center, VPos::Top)),
-        ))
-        .map_err(perr)?;
-        let title_font = (FONT, fs(17.0), FontStyle::Bold).into_font().color(&ink);
-        root.draw(&Text::new(fig.title.clone(), (l, 16), title_font.pos(Pos::new(HPos::Left, VPos::Top)))).map_err(perr)?;
-
-        if let Some(heat) = &fig.heat {
-            heatmap::draw_colour_bar(&root, heat, r)?;
-        }
-        draw_legend(&root, fig, (l, t, r, b))?;
-        root.present().map_err(perr)?;
-    }
-    Ok((svg, frame))
-}
-
-/// One legend row.
-enum Swatch {
-    Line(Style),
-    Band(Rgb, f64),
-    Marker(Rgb),
-}
-
-fn draw_legend<DB: DrawingBackend>(
-    root: &DrawingArea<DB, plotters::coord::Shift>,
-    fig: &Figure,
-    (l, t, r, b): (i32, i32, i32, i32),
-) -> Result<(), PlotError> {
-    let mut rows: Vec<(String, Swatch)> = Vec::new();
-    for s in fig.series.iter().filter(|s| !s.label.is_empty()) {
-        rows.push((s.label.clone(), Swatch::Line(s.style)));
-    }
-    for bd in fig.bands.iter().filter(|b| !b.label.is_empty()) {
-        rows.push((bd.label.clone(), Swatch::Band(bd.color, bd.opacity)));
-    }
-    for m in fig.markers.iter().filter(|m| !m.label.is_empty()) {
-        rows.push((m.label.clone(), Swatch::Marker(m.color)));
-    }
-    if rows.is_empty() || fig.legend == LegendAt::None {
-        return Ok(());
-    }
-    let row_h = 19;
-    let chars = rows.iter().map(|(s, _)| s.chars().count()).max().unwrap_or(0) as i32;
-    // Rough text width (no measuring): 7.2 px per character at 13 px.
-    let box_w = 44 + (chars * 72) / 10 + 10;
-    let box_h = row_h * rows.len() as i32 + 10;
-    let (bx, by) = match fig.legend {
-        LegendAt::TopRight | LegendAt::None => (r - box_w - 10, t + 10),
-        LegendAt::TopLeft => (l + 10, t + 10),
-        LegendAt::BottomLeft => (l + 10, b - box_h - 10),
-        LegendAt::BottomRight => (r - box_w - 10, b - box_h - 10),
+    let ty = Type::for_size(w as f64, h as f64);
+    let styles = colour::distinct_styles(&fig.series);
+    let shapes = marker_shapes(fig);
+    let entries = legend_entries(fig, &styles, &shapes);
+    let (lay, inside_legend) = place(fig, ty, &entries);
+    let (x0, x1, y0, y1) = lay.r;
+    let p = lay.plot;
+    let frame = PlotFrame {
+        left: p.x,
+        top: p.y,
+        width: p.w,
+        height: p.h,
+        x_min: if fig.x.log { 10f64.powf(x0) } else { x0 },
+        x_max: if fig.x.log { 10f64.powf(x1) } else { x1 },
+        y_min: if fig.y.log { 10f64.powf(y0) } else { y0 },
+        y_max: if fig.y.log { 10f64.powf(y1) } else { y1 },
+        x_log: fig.x.log,
+        y_log: fig.y.log,
+        svg_width: w,
+        svg_height: h,
     };
-    root.draw(&Rectangle::new([(bx, by), (bx + box_w, by + box_h)], WHITE.mix(0.92).filled())).map_err(perr)?;
-    root.draw(&Rectangle::new([(bx, by), (bx + box_w, by + box_h)], rgb(palette::GRID).stroke_width(1))).map_err(perr)?;
-    let font = (FONT, fs(13.0)).into_font().color(&rgb(palette::INK));
-    for (i, (label, sw)) in rows.iter().enumerate() {
-        let cy = by + 5 + row_h * i as i32 + row_h / 2;
-        let (sx0, sx1) = (bx + 10, bx + 36);
-        match sw {
-            Swatch::Line(st) => {
-                if let Some((fc, op)) = st.fill {
-                    root.draw(&Rectangle::new([(sx0, cy - 6), (sx1, cy + 6)], rgb(fc).mix(op).filled())).map_err(perr)?;
-                }
-                let s = rgb(st.color).stroke_width(st.width.max(1));
-                match st.dash {
-                    Dash::Solid => root.draw(&PathElement::new(vec![(sx0, cy), (sx1, cy)], s)).map_err(perr)?,
-                    Dash::Dashed => root
-                        .draw(&plotters::element::DashedPathElement::new(vec![(sx0, cy), (sx1, cy)], 7, 4, s))
-                        .map_err(perr)?,
-                    Dash::Dotted => root
-                        .draw(&plotters::element::DashedPathElement::new(vec![(sx0, cy), (sx1, cy)], 2, 4, s))
-                        .map_err(perr)?,
-                }
+    let bx = (x0, x1, y0, y1);
+    let tx = |v: f64| if fig.x.log { v.log10() } else { v };
+    let tyf = |v: f64| if fig.y.log { v.log10() } else { v };
+    let mut svg = Svg::new(w, h);
+    svg.rect(0.0, 0.0, w as f64, h as f64, Some((palette::WHITE, 1.0)), None);
+
+    // Bands first (under everything).
+    for band in &fig.bands {
+        let bx0 = if fig.x.log && band.x0 <= 0.0 { f64::NEG_INFINITY } else { tx(band.x0) };
+        let bx1 = if fig.x.log && band.x1 <= 0.0 { f64::NEG_INFINITY } else { tx(band.x1) };
+        let (a, b2) = (bx0.max(x0), bx1.min(x1));
+        if a < b2 {
+            let (pa, pb) = (lay.px(a), lay.px(b2));
+            svg.rect(pa, p.y, pb - pa, p.h, Some((band.color, band.opacity.clamp(0.0, 1.0))), None);
+        }
+    }
+    // Heat-map cells (over the bands, under the grid and the series).
+    if let Some(heat) = &fig.heat {
+        let to_px = |x: f64, y: f64| lay.to_px((tx(x).clamp(x0, x1), tyf(y).clamp(y0, y1)));
+        heatmap::draw_cells(&mut svg, heat, &to_px);
+    }
+    // Grid lines at major ticks (light over a heat map).
+    let grid = if fig.heat.is_some() {
+        Stroke { color: palette::WHITE, width: 0.8, opacity: 0.45, dash: Vec::new(), round_cap: false }
+    } else {
+        Stroke::solid(palette::GRID, 0.8)
+    };
+    for t in lay.xt.ticks.iter().filter(|t| t.major) {
+        let x = lay.px(t.at);
+        svg.path(&[(x, p.y), (x, p.bottom())], &grid);
+    }
+    for t in lay.yt.ticks.iter().filter(|t| t.major) {
+        let y = lay.py(t.at);
+        svg.path(&[(p.x, y), (p.right(), y)], &grid);
+    }
+
+    // Series: fills, then strokes.
+    for (s, st) in fig.series.iter().zip(&styles) {
+        let stroke = stroke_of(st);
+        for line in polylines(&s.points, fig.x.log, fig.y.log, bx) {
+            let px: Vec<(f64, f64)> = line.iter().map(|q| lay.to_px(*q)).collect();
+            if let Some((fc, op)) = st.fill {
+                svg.polygon(&px, (fc, op.clamp(0.0, 1.0)), None);
             }
-            Swatch::Band(c, op) => {
-                root.draw(&Rectangle::new([(sx0, cy - 6), (sx1, cy + 6)], rgb(*c).mix(*op).filled())).map_err(perr)?;
-            }
-            Swatch::Marker(c) => {
-                root.draw(&Circle::new(((sx0 + sx1) / 2, cy), 4, rgb(*c).stroke_width(2))).map_err(perr)?;
+            svg.path(&px, &stroke);
+        }
+    }
+
+    // Markers and error bars.
+    let inside = |x: f64, y: f64| x.is_finite() && y.is_finite() && x >= x0 && x <= x1 && y >= y0 && y <= y1;
+    for (m, sh) in fig.markers.iter().zip(&shapes) {
+        let st = Stroke::solid(m.color, 1.6);
+        for e in &m.error_bars {
+            let (ex, lo, hi) = (tx(e.x), tyf(e.lo), tyf(e.hi));
+            if let Some((a, b)) = (ex.is_finite() && lo.is_finite() && hi.is_finite()).then(|| clip((ex, lo), (ex, hi), bx)).flatten() {
+                let (pa, pb) = (lay.to_px(a), lay.to_px(b));
+                svg.path(&[pa, pb], &st);
+                for end in [pa, pb] {
+                    svg.path(&[(end.0 - 4.5, end.1), (end.0 + 4.5, end.1)], &st);
+                }
             }
         }
-        root.draw(&Text::new(label.clone(), (bx + 44, cy), font.pos(Pos::new(HPos::Left, VPos::Center)))).map_err(perr)?;
+        for &(x, y) in &m.points {
+            let (ax, ay) = (tx(x), tyf(y));
+            if inside(ax, ay) {
+                let (px, py) = lay.to_px((ax, ay));
+                draw_marker(&mut svg, *sh, px, py, m.radius.max(2) as f64, m.color);
+            }
+        }
     }
-    Ok(())
+
+    // Frame, ticks, tick labels.
+    let axis = Stroke::solid(palette::AXIS, 1.0);
+    svg.rect(p.x, p.y, p.w, p.h, None, Some(&axis));
+    let tick_text = |svg: &mut Svg, x: f64, y: f64, s: &str, anchor: Anchor| {
+        svg.text(&TextSpec { x, y, text: s, size: ty.tick, anchor, bold: false, rotate: 0.0, color: palette::INK });
+    };
+    for tk in &lay.xt.ticks {
+        let x = lay.px(tk.at);
+        let len = if tk.major { ty.tick_len } else { 0.55 * ty.tick_len };
+        svg.path(&[(x, p.bottom()), (x, p.bottom() + len)], &axis);
+        if tk.major && !tk.label.is_empty() {
+            tick_text(&mut svg, x, lay.xtick_base(), &tk.label, Anchor::Middle);
+        }
+    }
+    for tk in &lay.yt.ticks {
+        let y = lay.py(tk.at);
+        let len = if tk.major { ty.tick_len } else { 0.55 * ty.tick_len };
+        svg.path(&[(p.x - len, y), (p.x, y)], &axis);
+        if tk.major && !tk.label.is_empty() {
+            tick_text(&mut svg, p.x - ty.tick_len - ty.gap, y + centre_baseline(ty.tick), &tk.label, Anchor::End);
+        }
+    }
+    if let Some(f) = &lay.xt.factor {
+        tick_text(&mut svg, p.right(), lay.xlab_base(), f, Anchor::End);
+    }
+    if let Some(f) = &lay.yt.factor {
+        tick_text(&mut svg, p.x, p.y - ty.gap - DESCENT * ty.tick, f, Anchor::Start);
+    }
+
+    // Axis titles and the figure title.
+    let xl_centre = 0.5 * (p.x + lay.xlab_right());
+    for (k, line) in lay.xlab.iter().enumerate() {
+        svg.text(&TextSpec {
+            x: xl_centre,
+            y: lay.xlab_base() + k as f64 * pitch(ty.label),
+            text: line,
+            size: ty.label,
+            anchor: Anchor::Middle,
+            bold: false,
+            rotate: 0.0,
+            color: palette::INK,
+        });
+    }
+    let yc = p.y + 0.5 * p.h;
+    for (k, line) in lay.ylab.iter().enumerate() {
+        svg.text(&TextSpec {
+            x: ty.pad + ASCENT * ty.label + k as f64 * pitch(ty.label),
+            y: yc,
+            text: line,
+            size: ty.label,
+            anchor: Anchor::Middle,
+            bold: false,
+            rotate: -90.0,
+            color: palette::INK,
+        });
+    }
+    for (k, line) in lay.title.iter().enumerate() {
+        svg.text(&TextSpec {
+            x: ty.pad,
+            y: ty.pad + ASCENT * ty.title + k as f64 * pitch(ty.title),
+            text: line,
+            size: ty.title,
+            anchor: Anchor::Start,
+            bold: true,
+            rotate: 0.0,
+            color: palette::INK,
+        });
+    }
+
+    if let (Some(heat), Some(bar)) = (&fig.heat, &lay.bar) {
+        heatmap::draw_colour_bar(&mut svg, heat, bar, &ty, p);
+    }
+    if let Some((b, a)) = &inside_legend {
+        draw_legend(&mut svg, &lay.ty, b, a, true);
+    }
+    if let Some((b, a)) = &lay.outside {
+        // The layout's type: a long legend on a small figure may use a smaller legend size.
+        draw_legend(&mut svg, &lay.ty, b, a, false);
+    }
+    Ok((svg.finish(), frame))
 }
 
 /// Draws a figure and collects the hover data of its labelled series.
@@ -545,6 +608,16 @@ mod tests {
         let (x, _) = fr.to_data(fr.left + fr.width / 2.0, fr.top);
         // geometric mean of 1 and 1000, common practice, no source
         assert!((x - 1000f64.sqrt()).abs() < 1e-9 * 31.6);
+    }
+
+    #[test]
+    fn a_curve_far_from_the_origin_stays_one_path() {
+        // x ~ 1e7 (seconds), y ~ 1e-25 (strain): p + (q − p) ≠ q in floating point, yet
+        // consecutive unclipped segments must join into one polyline.
+        let pts: Vec<Option<(f64, f64)>> = (0..800).map(|k| Some((-1.0e7 + 2.5e4 * k as f64 + 0.1, 1e-25 * (k as f64 * 0.01).sin()))).collect();
+        let lines = polylines(&pts, false, false, (-2e7, 2e7, -1e-24, 1e-24));
+        assert_eq!(lines.len(), 1);
+        assert_eq!(lines[0].len(), 800);
     }
 
     #[test]
